@@ -1,6 +1,42 @@
+using Ledgerline.Api.Data;
+using Ledgerline.Api.Features.Access;
+using Ledgerline.Api.Features.Decisions;
+using Ledgerline.Api.Features.Outcomes;
+using Ledgerline.Api.Features.Reports;
+using Ledgerline.Api.Features.Scorecards;
+using Ledgerline.Api.Features.Traffic;
+using Ledgerline.Api.Http;
+
 var builder = WebApplication.CreateBuilder(args);
+
+builder.AddLedgerlineData();
+builder.Services.AddSingleton(TimeProvider.System);
+builder.Services.AddLedgerlineHttp();
+builder.Services.AddLedgerlineAccess();
+builder.Services.AddScorecards();
+builder.Services.AddTraffic();
+builder.Services.AddDecisions();
+builder.Services.AddOutcomes();
+builder.Services.AddReports();
+ValidationNames.UseJsonNames();
+
 var app = builder.Build();
-app.Run();
+
+app.UseLedgerlineHttp();
+app.UseAuthentication();
+app.UseAuthorization();
+
+app.MapScorecardRegistry();
+app.MapTraffic();
+app.MapDecisions();
+app.MapOutcomes();
+app.MapReports();
+app.MapAccess();
+app.MapHealthChecks("/health").AllowAnonymous();
+
+await app.MigrateLedgerlineDatabaseAsync();
+await app.BootstrapAdminKeyAsync();
+await app.RunAsync();
 
 /// <summary>The entry point, public so integration tests can host the real app.</summary>
 public partial class Program;

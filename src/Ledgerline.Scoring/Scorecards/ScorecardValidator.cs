@@ -28,9 +28,9 @@ public static partial class ScorecardValidator
     private static partial Regex NamePattern();
 
     /// <summary>Returns every problem found; an empty list means the definition is valid.</summary>
-    public static IReadOnlyList<ValidationProblem> Validate(ScorecardDefinition definition)
+    public static IReadOnlyList<FieldProblem> Validate(ScorecardDefinition definition)
     {
-        var problems = new List<ValidationProblem>();
+        var problems = new List<FieldProblem>();
         if (definition.Description is { Length: > 1000 })
         {
             problems.Add(new("description", "must be at most 1000 characters"));
@@ -48,7 +48,7 @@ public static partial class ScorecardValidator
         return problems;
     }
 
-    private static void CheckScaling(List<ValidationProblem> problems, Scaling scaling)
+    private static void CheckScaling(List<FieldProblem> problems, Scaling scaling)
     {
         CheckAmount(problems, "scaling.baseScore", scaling.BaseScore);
         if (scaling.BaseOdds <= 0)
@@ -62,7 +62,7 @@ public static partial class ScorecardValidator
         }
     }
 
-    private static void CheckCharacteristics(List<ValidationProblem> problems, IReadOnlyList<CharacteristicDefinition> characteristics)
+    private static void CheckCharacteristics(List<FieldProblem> problems, IReadOnlyList<CharacteristicDefinition> characteristics)
     {
         if (characteristics.Count == 0)
         {
@@ -138,7 +138,7 @@ public static partial class ScorecardValidator
         }
     }
 
-    private static void CheckNumericBins(List<ValidationProblem> problems, string path, CharacteristicDefinition c)
+    private static void CheckNumericBins(List<FieldProblem> problems, string path, CharacteristicDefinition c)
     {
         if (c.OtherPoints is not null)
         {
@@ -199,7 +199,7 @@ public static partial class ScorecardValidator
         }
     }
 
-    private static void CheckCategoricalBins(List<ValidationProblem> problems, string path, CharacteristicDefinition c)
+    private static void CheckCategoricalBins(List<FieldProblem> problems, string path, CharacteristicDefinition c)
     {
         if (c.OtherPoints is { } other)
         {
@@ -240,7 +240,7 @@ public static partial class ScorecardValidator
         }
     }
 
-    private static void CheckBands(List<ValidationProblem> problems, IReadOnlyList<DecisionBand> bands)
+    private static void CheckBands(List<FieldProblem> problems, IReadOnlyList<DecisionBand> bands)
     {
         if (bands.Count == 0)
         {
@@ -277,7 +277,7 @@ public static partial class ScorecardValidator
         }
     }
 
-    private static void CheckAmount(List<ValidationProblem> problems, string path, decimal value)
+    private static void CheckAmount(List<FieldProblem> problems, string path, decimal value)
     {
         if (value.Scale > MaxPointsDecimals && decimal.Round(value, MaxPointsDecimals) != value)
         {

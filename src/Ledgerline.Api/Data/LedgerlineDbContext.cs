@@ -1,0 +1,53 @@
+using Ledgerline.Api.Features.Access;
+using Ledgerline.Api.Features.Audit;
+using Ledgerline.Api.Features.Decisions;
+using Ledgerline.Api.Features.Outcomes;
+using Ledgerline.Api.Features.Scorecards;
+using Ledgerline.Api.Features.Traffic;
+using Microsoft.EntityFrameworkCore;
+
+namespace Ledgerline.Api.Data;
+
+/// <summary>
+/// The model shared by every provider. Each provider has a thin subclass that owns its own
+/// migration set (SQLite and PostgreSQL differ in types and SQL), so the model is written once.
+/// </summary>
+public abstract class LedgerlineDbContext(DbContextOptions options) : DbContext(options)
+{
+    public DbSet<Scorecard> Scorecards => Set<Scorecard>();
+
+    public DbSet<ScorecardVersion> Versions => Set<ScorecardVersion>();
+
+    public DbSet<VersionBaseline> Baselines => Set<VersionBaseline>();
+
+    public DbSet<TrafficPlanRevision> TrafficPlans => Set<TrafficPlanRevision>();
+
+    public DbSet<Decision> Decisions => Set<Decision>();
+
+    public DbSet<DecisionScore> DecisionScores => Set<DecisionScore>();
+
+    public DbSet<OutcomeObservation> Outcomes => Set<OutcomeObservation>();
+
+    public DbSet<ApiKey> ApiKeys => Set<ApiKey>();
+
+    public DbSet<AuditEntry> AuditEntries => Set<AuditEntry>();
+
+    protected override void OnModelCreating(ModelBuilder modelBuilder)
+    {
+        modelBuilder.ApplyConfiguration(new ScorecardConfiguration());
+        modelBuilder.ApplyConfiguration(new ScorecardVersionConfiguration());
+        modelBuilder.ApplyConfiguration(new VersionBaselineConfiguration());
+        modelBuilder.ApplyConfiguration(new TrafficConfiguration());
+        modelBuilder.ApplyConfiguration(new DecisionConfiguration());
+        modelBuilder.ApplyConfiguration(new DecisionScoreConfiguration());
+        modelBuilder.ApplyConfiguration(new OutcomeConfiguration());
+        modelBuilder.ApplyConfiguration(new ApiKeyConfiguration());
+        modelBuilder.Entity<AuditEntry>().HasIndex(e => e.At);
+    }
+
+    protected override void ConfigureConventions(ModelConfigurationBuilder configurationBuilder)
+    {
+        // Enums are stored as their names: readable in SQL, and safe against reordering.
+        configurationBuilder.Properties<Enum>().HaveConversion<string>().HaveMaxLength(32);
+    }
+}

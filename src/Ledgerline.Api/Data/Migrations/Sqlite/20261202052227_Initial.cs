@@ -1,0 +1,331 @@
+﻿using System;
+using Microsoft.EntityFrameworkCore.Migrations;
+
+#nullable disable
+
+namespace Ledgerline.Api.Data.Migrations.Sqlite
+{
+    /// <inheritdoc />
+    public partial class Initial : Migration
+    {
+        /// <inheritdoc />
+        protected override void Up(MigrationBuilder migrationBuilder)
+        {
+            migrationBuilder.CreateTable(
+                name: "ApiKeys",
+                columns: table => new
+                {
+                    Id = table.Column<Guid>(type: "TEXT", nullable: false),
+                    Name = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    SecretHash = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
+                    Roles = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    Scorecards = table.Column<string>(type: "TEXT", nullable: true),
+                    CreatedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    CreatedBy = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    ExpiresAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true),
+                    RevokedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_ApiKeys", x => x.Id);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "AuditEntries",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    At = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    Actor = table.Column<string>(type: "TEXT", nullable: false),
+                    Action = table.Column<string>(type: "TEXT", nullable: false),
+                    Subject = table.Column<string>(type: "TEXT", nullable: false),
+                    ContentHash = table.Column<string>(type: "TEXT", nullable: false)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_AuditEntries", x => x.Id);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "Scorecards",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    Key = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
+                    Name = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    BadDaysPastDue = table.Column<int>(type: "INTEGER", nullable: false),
+                    IndeterminateDaysPastDue = table.Column<int>(type: "INTEGER", nullable: false),
+                    PerformanceWindowMonths = table.Column<int>(type: "INTEGER", nullable: false),
+                    CreatedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    CreatedBy = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_Scorecards", x => x.Id);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "Decisions",
+                columns: table => new
+                {
+                    Id = table.Column<Guid>(type: "TEXT", nullable: false),
+                    ScorecardId = table.Column<long>(type: "INTEGER", nullable: false),
+                    ApplicationId = table.Column<string>(type: "TEXT", maxLength: 100, nullable: false),
+                    IdempotencyKey = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    RequestHash = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
+                    AssignmentKey = table.Column<string>(type: "TEXT", maxLength: 200, nullable: true),
+                    ApplicationDate = table.Column<DateOnly>(type: "TEXT", nullable: false),
+                    DecidedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    PlanRevision = table.Column<int>(type: "INTEGER", nullable: false),
+                    Version = table.Column<int>(type: "INTEGER", nullable: false),
+                    Role = table.Column<string>(type: "TEXT", maxLength: 32, nullable: false),
+                    Score = table.Column<long>(type: "INTEGER", nullable: false),
+                    ProbabilityOfBad = table.Column<double>(type: "REAL", nullable: false),
+                    Band = table.Column<string>(type: "TEXT", maxLength: 16, nullable: false),
+                    ReasonCodes = table.Column<string>(type: "TEXT", nullable: false),
+                    Outcome = table.Column<string>(type: "TEXT", maxLength: 32, nullable: true),
+                    Matured = table.Column<bool>(type: "INTEGER", nullable: false),
+                    OutcomeObservedAt = table.Column<DateOnly>(type: "TEXT", nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_Decisions", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_Decisions_Scorecards_ScorecardId",
+                        column: x => x.ScorecardId,
+                        principalTable: "Scorecards",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "TrafficPlans",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    ScorecardId = table.Column<long>(type: "INTEGER", nullable: false),
+                    Revision = table.Column<int>(type: "INTEGER", nullable: false),
+                    Salt = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
+                    ChampionVersion = table.Column<int>(type: "INTEGER", nullable: false),
+                    Challengers = table.Column<string>(type: "TEXT", nullable: false),
+                    Shadows = table.Column<string>(type: "TEXT", nullable: false),
+                    Reason = table.Column<string>(type: "TEXT", maxLength: 1000, nullable: false),
+                    ChangedBy = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    ChangedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_TrafficPlans", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_TrafficPlans_Scorecards_ScorecardId",
+                        column: x => x.ScorecardId,
+                        principalTable: "Scorecards",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "Versions",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    ScorecardId = table.Column<long>(type: "INTEGER", nullable: false),
+                    Number = table.Column<int>(type: "INTEGER", nullable: false),
+                    Status = table.Column<string>(type: "TEXT", maxLength: 32, nullable: false),
+                    ContentHash = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
+                    Content = table.Column<string>(type: "TEXT", nullable: false),
+                    RegisteredAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    RegisteredBy = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    ApprovedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true),
+                    ApprovedBy = table.Column<string>(type: "TEXT", maxLength: 200, nullable: true),
+                    RetiredAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true),
+                    RetiredBy = table.Column<string>(type: "TEXT", maxLength: 200, nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_Versions", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_Versions_Scorecards_ScorecardId",
+                        column: x => x.ScorecardId,
+                        principalTable: "Scorecards",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "DecisionScores",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    DecisionId = table.Column<Guid>(type: "TEXT", nullable: false),
+                    ScorecardId = table.Column<long>(type: "INTEGER", nullable: false),
+                    Version = table.Column<int>(type: "INTEGER", nullable: false),
+                    Role = table.Column<string>(type: "TEXT", maxLength: 32, nullable: false),
+                    Deciding = table.Column<bool>(type: "INTEGER", nullable: false),
+                    Score = table.Column<long>(type: "INTEGER", nullable: true),
+                    ProbabilityOfBad = table.Column<double>(type: "REAL", nullable: true),
+                    Band = table.Column<string>(type: "TEXT", maxLength: 16, nullable: true),
+                    MatchedBins = table.Column<string>(type: "TEXT", nullable: true),
+                    Error = table.Column<string>(type: "TEXT", maxLength: 1000, nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_DecisionScores", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_DecisionScores_Decisions_DecisionId",
+                        column: x => x.DecisionId,
+                        principalTable: "Decisions",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "Outcomes",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    DecisionId = table.Column<Guid>(type: "TEXT", nullable: false),
+                    ObservedAt = table.Column<DateOnly>(type: "TEXT", nullable: false),
+                    WorstDaysPastDue = table.Column<int>(type: "INTEGER", nullable: true),
+                    ChargedOff = table.Column<bool>(type: "INTEGER", nullable: true),
+                    Status = table.Column<string>(type: "TEXT", maxLength: 16, nullable: true),
+                    Classified = table.Column<string>(type: "TEXT", maxLength: 32, nullable: true),
+                    ReceivedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_Outcomes", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_Outcomes_Decisions_DecisionId",
+                        column: x => x.DecisionId,
+                        principalTable: "Decisions",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "Baselines",
+                columns: table => new
+                {
+                    VersionId = table.Column<long>(type: "INTEGER", nullable: false),
+                    Aggregates = table.Column<string>(type: "TEXT", nullable: false),
+                    AttachedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    AttachedBy = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_Baselines", x => x.VersionId);
+                    table.ForeignKey(
+                        name: "FK_Baselines_Versions_VersionId",
+                        column: x => x.VersionId,
+                        principalTable: "Versions",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_ApiKeys_SecretHash",
+                table: "ApiKeys",
+                column: "SecretHash",
+                unique: true);
+
+            migrationBuilder.CreateIndex(
+                name: "IX_AuditEntries_At",
+                table: "AuditEntries",
+                column: "At");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_DecisionScores_DecisionId",
+                table: "DecisionScores",
+                column: "DecisionId");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_DecisionScores_ScorecardId_Version",
+                table: "DecisionScores",
+                columns: new[] { "ScorecardId", "Version" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Decisions_ScorecardId_ApplicationDate",
+                table: "Decisions",
+                columns: new[] { "ScorecardId", "ApplicationDate" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Decisions_ScorecardId_ApplicationId",
+                table: "Decisions",
+                columns: new[] { "ScorecardId", "ApplicationId" },
+                unique: true);
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Decisions_ScorecardId_IdempotencyKey",
+                table: "Decisions",
+                columns: new[] { "ScorecardId", "IdempotencyKey" },
+                unique: true);
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Outcomes_DecisionId_ObservedAt",
+                table: "Outcomes",
+                columns: new[] { "DecisionId", "ObservedAt" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Scorecards_Key",
+                table: "Scorecards",
+                column: "Key",
+                unique: true);
+
+            migrationBuilder.CreateIndex(
+                name: "IX_TrafficPlans_ScorecardId_Revision",
+                table: "TrafficPlans",
+                columns: new[] { "ScorecardId", "Revision" },
+                unique: true);
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Versions_ScorecardId_ContentHash",
+                table: "Versions",
+                columns: new[] { "ScorecardId", "ContentHash" },
+                unique: true);
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Versions_ScorecardId_Number",
+                table: "Versions",
+                columns: new[] { "ScorecardId", "Number" },
+                unique: true);
+        }
+
+        /// <inheritdoc />
+        protected override void Down(MigrationBuilder migrationBuilder)
+        {
+            migrationBuilder.DropTable(
+                name: "ApiKeys");
+
+            migrationBuilder.DropTable(
+                name: "AuditEntries");
+
+            migrationBuilder.DropTable(
+                name: "Baselines");
+
+            migrationBuilder.DropTable(
+                name: "DecisionScores");
+
+            migrationBuilder.DropTable(
+                name: "Outcomes");
+
+            migrationBuilder.DropTable(
+                name: "TrafficPlans");
+
+            migrationBuilder.DropTable(
+                name: "Versions");
+
+            migrationBuilder.DropTable(
+                name: "Decisions");
+
+            migrationBuilder.DropTable(
+                name: "Scorecards");
+        }
+    }
+}

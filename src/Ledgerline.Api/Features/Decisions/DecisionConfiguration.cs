@@ -1,0 +1,38 @@
+using Ledgerline.Api.Data;
+using Ledgerline.Api.Features.Scorecards;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Metadata.Builders;
+
+namespace Ledgerline.Api.Features.Decisions;
+
+internal sealed class DecisionConfiguration : IEntityTypeConfiguration<Decision>
+{
+    public void Configure(EntityTypeBuilder<Decision> builder)
+    {
+        builder.HasOne<Scorecard>().WithMany().HasForeignKey(d => d.ScorecardId);
+        // Idempotency is enforced by these unique indexes, not by read-then-write: concurrent
+        // duplicates on any instance collide in the database.
+        builder.HasIndex(d => new { d.ScorecardId, d.IdempotencyKey }).IsUnique();
+        builder.HasIndex(d => new { d.ScorecardId, d.ApplicationId }).IsUnique();
+        builder.HasIndex(d => new { d.ScorecardId, d.ApplicationDate });
+        builder.Property(d => d.ApplicationId).HasMaxLength(100);
+        builder.Property(d => d.IdempotencyKey).HasMaxLength(200);
+        builder.Property(d => d.AssignmentKey).HasMaxLength(200);
+        builder.Property(d => d.RequestHash).HasMaxLength(64);
+        builder.Property(d => d.Band).HasMaxLength(16);
+        builder.Property(d => d.Score).HasConversion(ScoreUnits.Converter);
+        builder.HasMany(d => d.Scores).WithOne().HasForeignKey(s => s.DecisionId);
+    }
+}
+
+internal sealed class DecisionScoreConfiguration : IEntityTypeConfiguration<DecisionScore>
+{
+    public void Configure(EntityTypeBuilder<DecisionScore> builder)
+    {
+        builder.HasIndex(s => new { s.ScorecardId, s.Version });
+        builder.HasIndex(s => s.DecisionId);
+        builder.Property(s => s.Score).HasConversion(ScoreUnits.NullableConverter);
+        builder.Property(s => s.Band).HasMaxLength(16);
+        builder.Property(s => s.Error).HasMaxLength(1000);
+    }
+}

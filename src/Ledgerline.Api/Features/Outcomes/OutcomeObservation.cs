@@ -1,0 +1,25 @@
+using Ledgerline.Api.Features.Decisions;
+
+namespace Ledgerline.Api.Features.Outcomes;
+
+/// <summary>One posted observation of an account's performance; every one is kept for audit.</summary>
+public sealed class OutcomeObservation
+{
+    public long Id { get; set; }
+
+    public Guid DecisionId { get; set; }
+
+    public DateOnly ObservedAt { get; set; }
+
+    public int? WorstDaysPastDue { get; set; }
+
+    public bool? ChargedOff { get; set; }
+
+    /// <summary>An explicit status as posted ("good", "bad", "indeterminate").</summary>
+    public string? Status { get; set; }
+
+    /// <summary>How this observation classifies under the outcome definition.</summary>
+    public OutcomeClass? Classified { get; set; }
+
+    public DateTimeOffset ReceivedAt { get; set; }
+}

@@ -1,0 +1,47 @@
+using Microsoft.OpenApi;
+
+namespace Ledgerline.Api.Http;
+
+/// <summary>Swashbuckle: the document is always served (tests compare it with openapi/); the UI only in Development.</summary>
+public static class OpenApiRegistration
+{
+    public const string DocumentName = "v1";
+
+    public static IServiceCollection AddLedgerlineOpenApi(this IServiceCollection services)
+    {
+        services.AddEndpointsApiExplorer();
+        services.AddSwaggerGen(o =>
+        {
+            o.SwaggerDoc(DocumentName, new OpenApiInfo
+            {
+                Title = "Ledgerline",
+                Version = "v1",
+                Description = "Scorecard registry, champion–challenger scoring, decision log, outcomes and monitoring reports.",
+            });
+            o.AddSecurityDefinition("bearer", new OpenApiSecurityScheme
+            {
+                Type = SecuritySchemeType.Http,
+                Scheme = "bearer",
+                Description = "An API key from POST /access/keys, sent as 'Authorization: Bearer <key>'.",
+            });
+            o.AddSecurityRequirement(document => new OpenApiSecurityRequirement
+            {
+                [new OpenApiSecuritySchemeReference("bearer", document)] = [],
+            });
+            o.SupportNonNullableReferenceTypes();
+            o.CustomSchemaIds(t => t.FullName!.Replace("Ledgerline.Api.Features.", string.Empty, StringComparison.Ordinal).Replace('+', '.'));
+        });
+        return services;
+    }
+
+    public static WebApplication UseLedgerlineOpenApi(this WebApplication app)
+    {
+        app.UseSwagger(o => o.RouteTemplate = "openapi/{documentName}.json");
+        if (app.Environment.IsDevelopment())
+        {
+            app.UseSwaggerUI(o => o.SwaggerEndpoint($"/openapi/{DocumentName}.json", "Ledgerline v1"));
+        }
+
+        return app;
+    }
+}
