@@ -62,6 +62,19 @@ public class DeLongTests
     }
 
     [Fact]
+    public void PairedTest_OneCellPerApplication_EqualsAggregatedCells()
+    {
+        // Law: the sums are linear in the counts, so aggregation does not change the test (Sun & Xu 2014)
+        var single = DeLong.PairedTest(ReferenceData.German.Reverse().Select(row => new PairedScoreCount(row.ScoreA, row.ScoreB, row.Bad ? 0 : 1, row.Bad ? 1 : 0)));
+        var aggregated = DeLong.PairedTest(ReferenceData.German
+            .GroupBy(row => (row.ScoreA, row.ScoreB))
+            .Select(group => new PairedScoreCount(group.Key.ScoreA, group.Key.ScoreB, group.LongCount(row => !row.Bad), group.LongCount(row => row.Bad))));
+
+        Close.Relative(aggregated.Z!.Value, single.Z, 1e-12);
+        Close.Relative(aggregated.Covariance!.Value, single.Covariance, 1e-12);
+    }
+
+    [Fact]
     public void PairedTest_ScoreAgainstItself_ReturnsNullZWithReason()
     {
         // Law: Var(A − A) = 0, so z is undefined (DeLong et al. 1988)

@@ -162,6 +162,13 @@ public class RocTests
         Assert.Equal(3, histogram.TotalBads);
     }
 
+    [Fact]
+    public void ScoreHistogram_NotANumberScore_Throws()
+    {
+        // Programmer error: scores must be finite (documented exception)
+        Assert.Throws<ArgumentException>(() => new ScoreHistogram([new ScoreCount(double.NaN, 1, 0)]));
+    }
+
     internal static Func<ReferenceData.AsahRow, double> Marker(string marker) => marker switch
     {
         "s100b" => row => row.S100b,
