@@ -17,7 +17,7 @@ public sealed record BaselineAggregates(
     long? Bads,
     string EdgeRule,
     IReadOnlyList<ScoreBinCount> ScoreBins,
-    IReadOnlyList<ScoreFrequency> ScoreHistogram,
+    IReadOnlyList<DevelopmentScoreCount> ScoreHistogram,
     IReadOnlyList<CharacteristicDistribution> Characteristics,
     DevelopmentDiscrimination? Discrimination);
 
@@ -29,7 +29,7 @@ public sealed record BaselineAggregates(
 public sealed record ScoreBinCount(decimal? UpTo, long Count, double Share, long? Bads);
 
 /// <summary>How many development rows had one score, and how many of them were bad.</summary>
-public sealed record ScoreFrequency(decimal Score, long Count, long? Bads);
+public sealed record DevelopmentScoreCount(decimal Score, long Count, long? Bads);
 
 /// <summary>How a characteristic's values fell into its bins on the development sample.</summary>
 /// <param name="Name">The characteristic.</param>

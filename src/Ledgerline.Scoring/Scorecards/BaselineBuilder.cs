@@ -60,7 +60,7 @@ public sealed class BaselineBuilder
     /// repeated edges dropped. <paramref name="discrimination"/> computes AUC/KS from the histogram
     /// when the sample carried outcomes.
     /// </summary>
-    public BaselineAggregates Build(IReadOnlyList<decimal>? edges, Func<IReadOnlyList<ScoreFrequency>, DevelopmentDiscrimination?> discrimination)
+    public BaselineAggregates Build(IReadOnlyList<decimal>? edges, Func<IReadOnlyList<DevelopmentScoreCount>, DevelopmentDiscrimination?> discrimination)
     {
         if (_rows == 0)
         {
@@ -68,7 +68,7 @@ public sealed class BaselineBuilder
         }
 
         var withOutcomes = _rowsWithOutcome == _rows;
-        var histogram = _histogram.Select(h => new ScoreFrequency(h.Key, h.Value.Count, withOutcomes ? h.Value.Bads : null)).ToList();
+        var histogram = _histogram.Select(h => new DevelopmentScoreCount(h.Key, h.Value.Count, withOutcomes ? h.Value.Bads : null)).ToList();
         var cuts = edges ?? DecileEdges(histogram, _rows);
         var bins = new List<ScoreBinCount>(cuts.Count + 1);
         var position = 0;
@@ -99,7 +99,7 @@ public sealed class BaselineBuilder
     }
 
     /// <summary>Deciles by linear interpolation between order statistics (Hyndman &amp; Fan 1996, type 7; R's default).</summary>
-    private static List<decimal> DecileEdges(List<ScoreFrequency> histogram, long n)
+    private static List<decimal> DecileEdges(List<DevelopmentScoreCount> histogram, long n)
     {
         var edges = new List<decimal>(9);
         for (var k = 1; k <= 9; k++)
@@ -118,7 +118,7 @@ public sealed class BaselineBuilder
         return edges;
     }
 
-    private static decimal ValueAt(List<ScoreFrequency> histogram, long index)
+    private static decimal ValueAt(List<DevelopmentScoreCount> histogram, long index)
     {
         long seen = 0;
         foreach (var cell in histogram)
