@@ -20,7 +20,7 @@ internal sealed class BadRequestExceptionHandler(IProblemDetailsService problems
             case BadHttpRequestException { StatusCode: StatusCodes.Status413PayloadTooLarge }:
                 status = StatusCodes.Status413PayloadTooLarge;
                 title = "Request body too large";
-                detail = $"The request body is over this route's limit of {DescribeLimit(httpContext)}; split it into smaller requests.";
+                detail = TooLargeDetail(httpContext);
                 break;
             case BadHttpRequestException { InnerException: JsonException json }:
                 status = StatusCodes.Status400BadRequest;
@@ -45,6 +45,9 @@ internal sealed class BadRequestExceptionHandler(IProblemDetailsService problems
             ProblemDetails = { Status = status, Title = title, Detail = detail },
         });
     }
+
+    public static string TooLargeDetail(HttpContext context) =>
+        $"The request body is over this route's limit of {DescribeLimit(context)}; split it into smaller requests.";
 
     private static string DescribeLimit(HttpContext context)
     {

@@ -29,7 +29,13 @@ public static class OpenApiRegistration
                 [new OpenApiSecuritySchemeReference("bearer", document)] = [],
             });
             o.SupportNonNullableReferenceTypes();
-            o.CustomSchemaIds(t => t.FullName!.Replace("Ledgerline.Api.Features.", string.Empty, StringComparison.Ordinal).Replace('+', '.'));
+            o.CustomSchemaIds(t => t.FullName!
+                .Replace("Ledgerline.Api.Features.", string.Empty, StringComparison.Ordinal)
+                .Replace("Ledgerline.Scoring.", string.Empty, StringComparison.Ordinal)
+                .Replace('+', '.'));
+            // Handler method names are the operation ids (RegisterVersion, Decide, …).
+            o.CustomOperationIds(d => d.ActionDescriptor.EndpointMetadata.OfType<System.Reflection.MethodInfo>().FirstOrDefault()?.Name);
+            o.OperationFilter<ProblemResponsesFilter>();
         });
         return services;
     }

@@ -18,6 +18,8 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
 
     public LedgerlineApp(IDictionary<string, string?>? settings = null)
     {
+        // Real Kestrel on a loopback port, so server limits (body size, timeouts) apply as in production.
+        UseKestrel(0);
         if (settings is not null)
         {
             foreach (var (k, v) in settings)

@@ -15,7 +15,7 @@ public static class ProblemAssertions
         Assert.Equal((int)status, json.GetProperty("status").GetInt32());
         foreach (var mention in mentions)
         {
-            Assert.Contains(mention, body, StringComparison.Ordinal);
+            Assert.True(body.Contains(mention, StringComparison.Ordinal), $"Expected '{mention}' in: {body}");
         }
 
         return json;
