@@ -14,6 +14,7 @@ public sealed class CompiledScorecard
     private readonly FrozenDictionary<string, int> _indexByName;
     private readonly decimal[] _bandMinimums;
     private readonly Decision[] _bandDecisions;
+    private readonly decimal[] _maxPoints;
 
     private CompiledScorecard(ScorecardDefinition definition)
     {
@@ -26,6 +27,7 @@ public sealed class CompiledScorecard
         var bands = definition.DecisionBands;
         _bandMinimums = bands.Take(bands.Count - 1).Select(b => b.MinScore!.Value).ToArray();
         _bandDecisions = bands.Select(b => b.Decision).ToArray();
+        _maxPoints = _characteristics.Select(c => c.MaxPoints).ToArray();
     }
 
     /// <summary>The definition this was compiled from.</summary>
@@ -112,51 +114,43 @@ public sealed class CompiledScorecard
     /// </summary>
     private ReasonCode[] RankReasons(decimal[] points)
     {
-        var limit = Definition.ReasonCodeCount;
+        var limit = Math.Min(Definition.ReasonCodeCount, _characteristics.Length);
         if (limit == 0)
         {
             return [];
         }
 
-        Span<int> chosen = stackalloc int[Math.Min(limit, _characteristics.Length)];
+        Span<int> chosen = stackalloc int[limit];
+        Span<decimal> losses = stackalloc decimal[limit];
         var count = 0;
         for (var i = 0; i < _characteristics.Length; i++)
         {
-            var loss = _characteristics[i].MaxPoints - points[i];
-            if (loss <= 0)
+            var loss = _maxPoints[i] - points[i];
+            if (loss <= 0 || (count == limit && loss <= losses[count - 1]))
             {
                 continue;
             }
 
-            // Insertion into a short sorted list: strictly greater loss moves ahead, so equal
-            // losses keep characteristic order.
-            var position = count;
-            while (position > 0 && loss > _characteristics[chosen[position - 1]].MaxPoints - points[chosen[position - 1]])
+            // Insertion into a short list sorted by loss: only a strictly greater loss moves
+            // ahead, so equal losses keep characteristic order.
+            var position = Math.Min(count, limit - 1);
+            while (position > 0 && loss > losses[position - 1])
             {
+                chosen[position] = chosen[position - 1];
+                losses[position] = losses[position - 1];
                 position--;
             }
 
-            if (position >= chosen.Length)
-            {
-                continue;
-            }
-
-            var last = Math.Min(count, chosen.Length - 1);
-            for (var j = last; j > position; j--)
-            {
-                chosen[j] = chosen[j - 1];
-            }
-
             chosen[position] = i;
-            count = Math.Min(count + 1, chosen.Length);
+            losses[position] = loss;
+            count = Math.Min(count + 1, limit);
         }
 
         var reasons = new ReasonCode[count];
         for (var r = 0; r < count; r++)
         {
-            var c = _characteristics[chosen[r]];
-            reasons[r] = new ReasonCode(c.Definition.ReasonCode, c.Definition.Name, c.Definition.ReasonText,
-                CanonicalNumber.Normalize(c.MaxPoints - points[chosen[r]]));
+            var c = _characteristics[chosen[r]].Definition;
+            reasons[r] = new ReasonCode(c.ReasonCode, c.Name, c.ReasonText, losses[r]);
         }
 
         return reasons;

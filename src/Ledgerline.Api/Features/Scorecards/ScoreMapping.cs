@@ -15,7 +15,7 @@ public static class ScoreMapping
         Characteristics(compiled, result.MatchedBins, result.Points));
 
     public static IReadOnlyList<ReasonCodeResponse> ToResponse(IEnumerable<ReasonCode> reasons) =>
-        reasons.Select(r => new ReasonCodeResponse(r.Code, r.Characteristic, r.Text, r.PointsBelowMax)).ToList();
+        reasons.Select(r => new ReasonCodeResponse(r.Code, r.Characteristic, r.Text, CanonicalNumber.Normalize(r.PointsBelowMax))).ToList();
 
     /// <summary>Each characteristic's matched bin and points; points follow from the bins and the immutable version.</summary>
     public static IReadOnlyList<CharacteristicScore> Characteristics(CompiledScorecard compiled, IReadOnlyList<int> bins, IReadOnlyList<decimal>? points = null)
