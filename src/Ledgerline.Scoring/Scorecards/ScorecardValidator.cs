@@ -124,7 +124,10 @@ public static partial class ScorecardValidator
 
             for (var b = 0; b < c.Bins.Count; b++)
             {
-                CheckAmount(problems, $"{path}.bins[{b}].points", c.Bins[b].Points);
+                if (AmountProblem(c.Bins[b].Points) is { } message)
+                {
+                    problems.Add(new($"{path}.bins[{b}].points", message));
+                }
             }
 
             if (c.Type == CharacteristicType.Numeric)
@@ -149,7 +152,7 @@ public static partial class ScorecardValidator
         for (var b = 0; b < bins.Count; b++)
         {
             var bin = bins[b];
-            var binPath = $"{path}.bins[{b}]";
+            var binPath = new BinPath(path, b);
             if (bin.Values is not null)
             {
                 problems.Add(new($"{binPath}.values", "numeric bins take 'from' and 'upTo', not 'values'"));
@@ -175,19 +178,19 @@ public static partial class ScorecardValidator
                 problems.Add(new($"{binPath}.upTo", "must be given on every numeric bin but the last"));
             }
 
-            if (bin.From is { } from)
+            if (bin.From is { } from && AmountProblem(from) is { } fromProblem)
             {
-                CheckAmount(problems, $"{binPath}.from", from);
+                problems.Add(new($"{binPath}.from", fromProblem));
             }
 
-            if (bin.UpTo is { } upTo)
+            if (bin.UpTo is { } upTo && AmountProblem(upTo) is { } upToProblem)
             {
-                CheckAmount(problems, $"{binPath}.upTo", upTo);
+                problems.Add(new($"{binPath}.upTo", upToProblem));
             }
 
             if (bin is { From: { } f, UpTo: { } u } && f >= u)
             {
-                problems.Add(new($"{binPath}", $"'from' ({Format(f)}) must be below 'upTo' ({Format(u)}); bins are [from, upTo)"));
+                problems.Add(new(binPath.ToString(), $"'from' ({Format(f)}) must be below 'upTo' ({Format(u)}); bins are [from, upTo)"));
             }
 
             if (b > 0 && bins[b - 1].UpTo is { } previousUpTo && bin.From is { } currentFrom && previousUpTo != currentFrom)
@@ -210,10 +213,10 @@ public static partial class ScorecardValidator
         for (var b = 0; b < c.Bins.Count; b++)
         {
             var bin = c.Bins[b];
-            var binPath = $"{path}.bins[{b}]";
+            var binPath = new BinPath(path, b);
             if (bin.From is not null || bin.UpTo is not null)
             {
-                problems.Add(new(binPath, "categorical bins take 'values', not 'from' or 'upTo'"));
+                problems.Add(new(binPath.ToString(), "categorical bins take 'values', not 'from' or 'upTo'"));
             }
 
             if (bin.Values is null || bin.Values.Count == 0)
@@ -279,16 +282,29 @@ public static partial class ScorecardValidator
 
     private static void CheckAmount(List<FieldProblem> problems, string path, decimal value)
     {
-        if (value.Scale > MaxPointsDecimals && decimal.Round(value, MaxPointsDecimals) != value)
+        if (AmountProblem(value) is { } message)
         {
-            problems.Add(new(path, $"has more than {MaxPointsDecimals} decimal places ({Format(value)}); round it so scores stay exact"));
-        }
-
-        if (Math.Abs(value) > MaxMagnitude)
-        {
-            problems.Add(new(path, $"must be between -{MaxMagnitude:0} and {MaxMagnitude:0}; was {Format(value)}"));
+            problems.Add(new(path, message));
         }
     }
 
+    // Checked without building the field path, which is only formatted for a value that fails:
+    // large tables hold tens of thousands of amounts.
+    private static string? AmountProblem(decimal value)
+    {
+        if (value.Scale > MaxPointsDecimals && decimal.Round(value, MaxPointsDecimals) != value)
+        {
+            return $"has more than {MaxPointsDecimals} decimal places ({Format(value)}); round it so scores stay exact";
+        }
+
+        return Math.Abs(value) > MaxMagnitude ? $"must be between -{MaxMagnitude:0} and {MaxMagnitude:0}; was {Format(value)}" : null;
+    }
+
     internal static string Format(decimal value) => CanonicalNumber.Format(value);
+
+    /// <summary>A bin's field path, formatted only when a problem is reported.</summary>
+    private readonly record struct BinPath(string Characteristic, int Bin)
+    {
+        public override string ToString() => $"{Characteristic}.bins[{Bin}]";
+    }
 }
