@@ -19,6 +19,10 @@ public static class HttpRegistration
         {
             c.ProblemDetails.Extensions["traceId"] = c.HttpContext.TraceIdentifier;
             c.ProblemDetails.Instance ??= c.HttpContext.Request.Path;
+            if (c.ProblemDetails.Status == StatusCodes.Status413PayloadTooLarge)
+            {
+                c.ProblemDetails.Detail ??= BadRequestExceptionHandler.TooLargeDetail(c.HttpContext);
+            }
         });
         services.AddExceptionHandler<BadRequestExceptionHandler>();
         services.Configure<Microsoft.AspNetCore.Server.Kestrel.Core.KestrelServerOptions>(o => o.Limits.MaxRequestBodySize = DefaultBodyLimitBytes);

@@ -45,8 +45,9 @@ public static class AccessEndpoints
 
     public static async Task<Ok<List<KeyResponse>>> ListKeys(LedgerlineDbContext db, CancellationToken ct)
     {
-        var keys = await db.ApiKeys.AsNoTracking().OrderBy(k => k.CreatedAt).ToListAsync(ct);
-        return TypedResults.Ok(keys.Select(ToResponse).ToList());
+        // Sorted here: SQLite cannot order by a time with an offset, and keys are few.
+        var keys = await db.ApiKeys.AsNoTracking().ToListAsync(ct);
+        return TypedResults.Ok(keys.OrderBy(k => k.CreatedAt).ThenBy(k => k.Id).Select(ToResponse).ToList());
     }
 
     public static async Task<Results<NoContent, ProblemHttpResult>> RevokeKey(

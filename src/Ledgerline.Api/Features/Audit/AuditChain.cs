@@ -90,7 +90,7 @@ public static class AuditChain
     /// <c>ledgerline-audit-v1\n</c> followed, for each of sequence, at, actor, action, subject,
     /// contentHash and previousHash in that order, by the field's UTF-8 byte length in decimal,
     /// a colon, the field, and a line feed. The sequence is written in decimal; the time as UTC
-    /// <c>yyyy-MM-ddTHH:mm:ss.ffffffZ</c>. Length prefixes make the form unambiguous whatever the
+    /// <c>yyyy-MM-ddTHH:mm:ss.ffffffZ</c> (always six decimals). Length prefixes make the form unambiguous whatever the
     /// fields contain, and any language can rebuild it.
     /// </summary>
     public static string HashEntry(AuditEntry entry)
@@ -99,7 +99,7 @@ public static class AuditChain
         foreach (var field in new[]
         {
             entry.Sequence.ToString(System.Globalization.CultureInfo.InvariantCulture),
-            entry.At.UtcDateTime.ToString("yyyy-MM-dd'T'HH:mm:ss.ffffff'Z'", System.Globalization.CultureInfo.InvariantCulture),
+            entry.At.ToString("yyyy-MM-dd'T'HH:mm:ss.ffffff'Z'", System.Globalization.CultureInfo.InvariantCulture),
             entry.Actor,
             entry.Action,
             entry.Subject,
@@ -114,8 +114,8 @@ public static class AuditChain
     }
 
     /// <summary>Whole microseconds in UTC: PostgreSQL keeps no finer time, and the hash must replay there.</summary>
-    public static DateTimeOffset Normalise(DateTimeOffset at) =>
-        new(at.UtcTicks - (at.UtcTicks % 10), TimeSpan.Zero);
+    public static DateTime Normalise(DateTime utc) =>
+        new(utc.Ticks - (utc.Ticks % 10), DateTimeKind.Utc);
 
     private static void Link(LedgerlineDbContext db, ChainTail? tail)
     {

@@ -65,13 +65,13 @@ public static class AuditEndpoints
 
         if (from is { } start)
         {
-            var utc = AuditChain.Normalise(start);
+            var utc = AuditChain.Normalise(start.UtcDateTime);
             query = query.Where(e => e.At >= utc);
         }
 
         if (to is { } end)
         {
-            var utc = AuditChain.Normalise(end);
+            var utc = AuditChain.Normalise(end.UtcDateTime);
             query = query.Where(e => e.At < utc);
         }
 
@@ -121,5 +121,5 @@ public static class AuditEndpoints
     }
 
     private static AuditEntryResponse ToResponse(AuditEntry e) =>
-        new(e.Sequence, e.At, e.Actor, e.Action, e.Subject, e.ContentHash, e.PreviousHash, e.EntryHash);
+        new(e.Sequence, new DateTimeOffset(DateTime.SpecifyKind(e.At, DateTimeKind.Utc)), e.Actor, e.Action, e.Subject, e.ContentHash, e.PreviousHash, e.EntryHash);
 }

@@ -12,8 +12,11 @@ public sealed class AuditEntry
     /// <summary>Position in the chain: 1, 2, 3… without gaps; unique, so two writers can never fork the chain.</summary>
     public long Sequence { get; set; }
 
-    /// <summary>UTC, whole microseconds (the finest both stores keep), so the hash replays on either.</summary>
-    public DateTimeOffset At { get; set; }
+    /// <summary>
+    /// UTC, whole microseconds (the finest both stores keep), so the hash replays on either. A
+    /// UTC <see cref="DateTime"/> rather than an offset: SQLite can then compare it in SQL.
+    /// </summary>
+    public DateTime At { get; set; }
 
     public required string Actor { get; set; }
 

@@ -86,7 +86,7 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                         .HasMaxLength(200)
                         .HasColumnType("character varying(200)");
 
-                    b.Property<DateTimeOffset>("At")
+                    b.Property<DateTime>("At")
                         .HasColumnType("timestamp with time zone");
 
                     b.Property<string>("ContentHash")

@@ -79,7 +79,7 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                         .HasMaxLength(200)
                         .HasColumnType("TEXT");
 
-                    b.Property<DateTimeOffset>("At")
+                    b.Property<DateTime>("At")
                         .HasColumnType("TEXT");
 
                     b.Property<string>("ContentHash")

@@ -38,7 +38,7 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                     Id = table.Column<long>(type: "bigint", nullable: false)
                         .Annotation("Npgsql:ValueGenerationStrategy", NpgsqlValueGenerationStrategy.IdentityByDefaultColumn),
                     Sequence = table.Column<long>(type: "bigint", nullable: false),
-                    At = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: false),
+                    At = table.Column<DateTime>(type: "timestamp with time zone", nullable: false),
                     Actor = table.Column<string>(type: "character varying(200)", maxLength: 200, nullable: false),
                     Action = table.Column<string>(type: "character varying(100)", maxLength: 100, nullable: false),
                     Subject = table.Column<string>(type: "character varying(300)", maxLength: 300, nullable: false),

@@ -37,7 +37,7 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                     Id = table.Column<long>(type: "INTEGER", nullable: false)
                         .Annotation("Sqlite:Autoincrement", true),
                     Sequence = table.Column<long>(type: "INTEGER", nullable: false),
-                    At = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    At = table.Column<DateTime>(type: "TEXT", nullable: false),
                     Actor = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
                     Action = table.Column<string>(type: "TEXT", maxLength: 100, nullable: false),
                     Subject = table.Column<string>(type: "TEXT", maxLength: 300, nullable: false),
