@@ -1,5 +1,6 @@
 using FluentValidation;
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Features.Audit;
 using Microsoft.AspNetCore.Authentication;
 using Microsoft.AspNetCore.Authorization;
 using Microsoft.EntityFrameworkCore;
@@ -16,6 +17,7 @@ public static class AccessRegistration
         services.AddAuthorizationBuilder()
             // Default deny: a route that names no roles admits nobody but an authenticated admin.
             .SetFallbackPolicy(new AuthorizationPolicyBuilder().RequireRole(Roles.Admin).Build());
+        services.AddSingleton<IAuthorizationMiddlewareResultHandler, AccessDeniedHandler>();
         services.AddOptions<AccessOptions>().BindConfiguration(AccessOptions.Section);
         services.AddSingleton<IValidator<CreateKeyRequest>, CreateKeyRequestValidator>();
         return services;
@@ -28,10 +30,16 @@ public static class AccessRegistration
         return group;
     }
 
-    /// <summary>Admits keys holding any of the roles.</summary>
+    /// <summary>Admits keys holding any of the roles; the refusals (401, 403) and the rate limit (429) appear in OpenAPI.</summary>
     public static TBuilder AllowRoles<TBuilder>(this TBuilder builder, params string[] roles)
         where TBuilder : IEndpointConventionBuilder =>
-        builder.RequireAuthorization(p => p.RequireRole(roles));
+        builder.RequireAuthorization(p => p.RequireRole(roles)).WithMetadata(
+            Refusal(StatusCodes.Status401Unauthorized),
+            Refusal(StatusCodes.Status403Forbidden),
+            Refusal(StatusCodes.Status429TooManyRequests));
+
+    private static ProducesResponseTypeMetadata Refusal(int status) =>
+        new(status, typeof(Microsoft.AspNetCore.Mvc.ProblemDetails), ["application/problem+json"]);
 
     /// <summary>
     /// On first start with no keys, the configured bootstrap secret becomes an admin key. Never
@@ -52,7 +60,7 @@ public static class AccessRegistration
             return;
         }
 
-        db.ApiKeys.Add(new ApiKey
+        var key = new ApiKey
         {
             Id = Guid.CreateVersion7(),
             Name = "bootstrap admin",
@@ -60,7 +68,9 @@ public static class AccessRegistration
             Roles = Roles.Admin,
             CreatedAt = app.Services.GetRequiredService<TimeProvider>().GetUtcNow(),
             CreatedBy = "configuration",
-        });
+        };
+        db.ApiKeys.Add(key);
+        db.Record(key.CreatedBy, "key.created", $"keys/{key.Id}", new { key.Name, key.Roles, key.Scorecards, key.ExpiresAt }, key.CreatedAt);
         try
         {
             await db.SaveChangesAsync();
