@@ -14,6 +14,9 @@ public sealed class AlertOptions
     /// <summary>Seconds between looks for webhook deliveries that are due.</summary>
     public double WebhookPollSeconds { get; set; } = 5;
 
-    /// <summary>Attempts before a delivery is abandoned; the wait doubles after each failure (2 s, 4 s, 8 s … up to an hour).</summary>
+    /// <summary>Attempts before a delivery is abandoned.</summary>
     public int WebhookMaxAttempts { get; set; } = 10;
+
+    /// <summary>Wait before the first retry; it doubles after each further failure, up to an hour.</summary>
+    public double WebhookFirstRetrySeconds { get; set; } = 2;
 }

@@ -93,7 +93,7 @@ public sealed class AlertWebhookSender(IServiceScopeFactory scopes, IHttpClientF
             return;
         }
 
-        var wait = TimeSpan.FromSeconds(Math.Min(Math.Pow(2, attempts), LongestWait.TotalSeconds));
+        var wait = TimeSpan.FromSeconds(Math.Min(options.Value.WebhookFirstRetrySeconds * Math.Pow(2, attempts - 1), LongestWait.TotalSeconds));
         var abandon = attempts >= options.Value.WebhookMaxAttempts;
         logger.LogWarning("Alert webhook delivery {Id} failed (attempt {Attempts}): {Error}", delivery.Id, attempts, error);
         await db.AlertDeliveries.Where(d => d.Id == delivery.Id).ExecuteUpdateAsync(s => s
