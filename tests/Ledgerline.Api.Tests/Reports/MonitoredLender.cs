@@ -134,6 +134,24 @@ public sealed class MonitoredLender
         return decided;
     }
 
+    /// <summary>Posts each applicant's true outcome, observed on <paramref name="observedAt"/>, through the outcomes endpoint.</summary>
+    public static async Task PostOutcomesAsync(HttpClient outcomes, string key, IEnumerable<(string ApplicationId, bool Bad)> truth, string observedAt)
+    {
+        foreach (var chunk in truth.Chunk(2000))
+        {
+            var rows = new JsonArray();
+            foreach (var (id, bad) in chunk)
+            {
+                rows.Add(new JsonObject { ["applicationId"] = id, ["observedAt"] = observedAt, ["status"] = bad ? "bad" : "good" });
+            }
+
+            var response = await outcomes.PostAsync($"/scorecards/{key}/outcomes", Scenario.Json(new JsonObject { ["outcomes"] = rows }));
+            var body = await response.Content.ReadAsStringAsync();
+            Assert.True(response.IsSuccessStatusCode, body);
+            Assert.Equal(chunk.Length, JsonDocument.Parse(body).RootElement.GetProperty("accepted").GetInt32());
+        }
+    }
+
     public static async Task<JsonElement> GetJsonAsync(HttpClient client, string path)
     {
         var response = await client.GetAsync(path);
