@@ -12,7 +12,7 @@ using Npgsql.EntityFrameworkCore.PostgreSQL.Metadata;
 namespace Ledgerline.Api.Data.Migrations.Postgres
 {
     [DbContext(typeof(PostgresLedgerlineDbContext))]
-    [Migration("20261202054042_Initial")]
+    [Migration("20261202062620_Initial")]
     partial class Initial
     {
         /// <inheritdoc />
@@ -381,9 +381,9 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
 
                     b.HasKey("Id");
 
-                    b.HasIndex("DecisionId");
+                    b.HasIndex("DecisionId", "Version", "Score");
 
-                    b.HasIndex("ScorecardId", "Version");
+                    b.HasIndex("ScorecardId", "Version", "DecisionId", "Score");
 
                     b.ToTable("DecisionScores");
                 });

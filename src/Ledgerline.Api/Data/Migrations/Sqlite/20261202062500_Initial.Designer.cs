@@ -11,7 +11,7 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace Ledgerline.Api.Data.Migrations.Sqlite
 {
     [DbContext(typeof(SqliteLedgerlineDbContext))]
-    [Migration("20261202053900_Initial")]
+    [Migration("20261202062500_Initial")]
     partial class Initial
     {
         /// <inheritdoc />
@@ -368,9 +368,9 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
 
                     b.HasKey("Id");
 
-                    b.HasIndex("DecisionId");
+                    b.HasIndex("DecisionId", "Version", "Score");
 
-                    b.HasIndex("ScorecardId", "Version");
+                    b.HasIndex("ScorecardId", "Version", "DecisionId", "Score");
 
                     b.ToTable("DecisionScores");
                 });
