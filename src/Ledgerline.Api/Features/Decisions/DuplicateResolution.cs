@@ -13,7 +13,7 @@ public static class DuplicateResolution
     {
         var byKey = await db.Decisions.AsNoTracking()
             .FirstOrDefaultAsync(d => d.ScorecardId == attempted.ScorecardId && d.IdempotencyKey == attempted.IdempotencyKey, ct);
-        if (byKey is not null)
+        if (byKey is not null && !(byKey.ApplicationId == attempted.ApplicationId && attempted.IdempotencyKey == attempted.ApplicationId))
         {
             return byKey.RequestHash == attempted.RequestHash
                 ? (DecisionMaker.ToResponse(byKey), null)
@@ -21,7 +21,7 @@ public static class DuplicateResolution
                     + "resend the original body to read that decision, or use a new key for a new request.");
         }
 
-        var byApplication = await db.Decisions.AsNoTracking()
+        var byApplication = byKey ?? await db.Decisions.AsNoTracking()
             .FirstOrDefaultAsync(d => d.ScorecardId == attempted.ScorecardId && d.ApplicationId == attempted.ApplicationId, ct);
         if (byApplication is not null)
         {
