@@ -24,11 +24,11 @@ public readonly record struct CurrentOutcome(PerformanceClass Class, bool Mature
 /// show the account cured.</item>
 /// <item>Otherwise the latest counting reading decides (by observation date; on the same date, the
 /// one posted last).</item>
-/// <item>Delinquency readings dated after the window end cannot be placed inside the window
-/// ("worst so far" may come from after it), so they never change a class the window's readings
-/// give. When they are all there is, the earliest of them classifies, with bad lowered to
-/// indeterminate: the delinquency is real but its timing unknown, so it is kept out of the
-/// good/bad figures rather than guessed either way.</item>
+/// <item>Delinquency readings dated after the window end may report delinquency from after it
+/// ("worst so far"), so they never change a class the window's own readings give. When nothing
+/// was read inside the window, the earliest reading after it stands for the window, bad included:
+/// its "worst so far" covers the whole window, and a servicing run shortly after the window end
+/// is how the window's result usually arrives. Later readings after the window change nothing.</item>
 /// <item>Matured: bad by rule 2, or any reading dated on or after the window end.</item>
 /// </list>
 /// </remarks>
@@ -77,7 +77,7 @@ public static class OutcomeClassifier
             else if (earliestLateDate is null || reading.ObservedAt < earliestLateDate)
             {
                 earliestLateDate = reading.ObservedAt;
-                earliestLateClass = shown == PerformanceClass.Bad ? PerformanceClass.Indeterminate : shown;
+                earliestLateClass = shown;
             }
         }
 

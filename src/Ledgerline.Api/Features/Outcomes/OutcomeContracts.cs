@@ -49,18 +49,3 @@ public sealed record VersionMaturity(
     int Immature,
     int WindowEndedAwaitingOutcome,
     DateOnly? NextMaturityDate);
-
-/// <summary>The JSON body of <c>POST /scorecards/{key}/outcomes</c> (CSV carries the same fields as columns).</summary>
-/// <param name="Outcomes">Up to 50,000 rows.</param>
-public sealed record RecordOutcomesRequest(IReadOnlyList<OutcomeRowContract> Outcomes);
-
-/// <summary>
-/// One observation of an account: <c>worstDaysPastDue</c>, <c>chargedOff</c>, <c>status</c>, or
-/// a consistent combination of them.
-/// </summary>
-/// <param name="ApplicationId">The application the decision was made for.</param>
-/// <param name="ObservedAt">The date the account was observed (yyyy-MM-dd): not before the application date, not in the future.</param>
-/// <param name="WorstDaysPastDue">Worst days past due from the application date up to <paramref name="ObservedAt"/>; a whole number, 0 or more.</param>
-/// <param name="ChargedOff">True when the account was charged off by <paramref name="ObservedAt"/>.</param>
-/// <param name="Status">good, bad or indeterminate, when the servicing system classified the account itself.</param>
-public sealed record OutcomeRowContract(string ApplicationId, DateOnly ObservedAt, int? WorstDaysPastDue, bool? ChargedOff, string? Status);

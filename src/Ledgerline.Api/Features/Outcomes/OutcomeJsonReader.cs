@@ -190,6 +190,7 @@ internal sealed class OutcomeJsonReader(Stream body, int maxRows) : IOutcomeRowR
         }
     }
 
+    /// <summary>Reads one row object; the whole object is in the buffer (TrySkip succeeded), so skipping a value cannot run short.</summary>
     private static void ReadRow(ref Utf8JsonReader reader, OutcomeRow row)
     {
         while (reader.Read() && reader.TokenType == JsonTokenType.PropertyName)
@@ -223,7 +224,7 @@ internal sealed class OutcomeJsonReader(Stream body, int maxRows) : IOutcomeRowR
             {
                 var name = OutcomeFieldText.Shorten(reader.GetString() ?? string.Empty);
                 reader.Read();
-                reader.Skip();
+                _ = reader.TrySkip();
                 row.Fail($"'{name}' is not a field of an outcome; the fields are {OutcomeFieldText.FieldList}.");
             }
         }
@@ -239,7 +240,7 @@ internal sealed class OutcomeJsonReader(Stream body, int maxRows) : IOutcomeRowR
             case JsonTokenType.Null:
                 break;
             default:
-                reader.Skip();
+                _ = reader.TrySkip();
                 row.Fail($"{field} must be text in quotes.");
                 break;
         }
@@ -258,7 +259,7 @@ internal sealed class OutcomeJsonReader(Stream body, int maxRows) : IOutcomeRowR
             case JsonTokenType.Null:
                 break;
             default:
-                reader.Skip();
+                _ = reader.TrySkip();
                 row.Fail("worstDaysPastDue must be a number of days, not in quotes.");
                 break;
         }
@@ -277,7 +278,7 @@ internal sealed class OutcomeJsonReader(Stream body, int maxRows) : IOutcomeRowR
             case JsonTokenType.Null:
                 break;
             default:
-                reader.Skip();
+                _ = reader.TrySkip();
                 row.Fail("chargedOff must be true or false, not in quotes.");
                 break;
         }

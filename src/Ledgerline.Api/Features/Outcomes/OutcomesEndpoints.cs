@@ -25,10 +25,14 @@ public static class OutcomesEndpoints
 
     public static IEndpointRouteBuilder MapOutcomes(this IEndpointRouteBuilder routes)
     {
+        // The body is read by hand (JSON or CSV, streamed), so no Accepts metadata: its content-type
+        // routing would answer unsupported types before the handler could explain them.
         // Servicing systems post outcomes; analysts and risk managers read maturity.
         var group = routes.MapGroup("/scorecards/{key}").WithTags("Outcomes").ForScorecardRoutes();
         group.MapPost("/outcomes", RecordOutcomes)
-            .Accepts<RecordOutcomesRequest>("application/json", "text/csv")
+            .WithDescription(
+                "Body: application/json { \"outcomes\": [ { \"applicationId\", \"observedAt\": \"yyyy-MM-dd\", \"worstDaysPastDue\" | \"chargedOff\" | \"status\" } ] }, " +
+                "or text/csv with a header row of the same field names. Up to 50,000 rows. Query atomic=true: one bad row stores nothing.")
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType)
             .WithBodyLimit(OutcomesBodyLimitBytes)
