@@ -46,6 +46,15 @@ public sealed partial class RouteAccessTests
         ["POST /scorecards/{key}/decisions"] = ["scoring"],
         ["POST /scorecards/{key}/decisions/batch"] = ["scoring"],
         ["GET /scorecards/{key}/decisions/{applicationId}"] = ["scoring", "risk", "analyst"],
+        ["POST /scorecards/{key}/outcomes"] = ["outcomes"],
+        ["GET /scorecards/{key}/maturity"] = ["risk", "analyst"],
+        ["GET /scorecards/{key}/reports/performance"] = ["analyst", "risk"],
+        ["GET /scorecards/{key}/reports/comparison"] = ["analyst", "risk"],
+        ["GET /scorecards/{key}/reports/stability"] = ["analyst", "risk"],
+        ["GET /scorecards/{key}/alerts"] = ["risk", "analyst"],
+        ["POST /scorecards/{key}/alerts/evaluation"] = ["risk"],
+        ["GET /scorecards/{key}/alert-thresholds"] = ["risk", "analyst"],
+        ["PUT /scorecards/{key}/alert-thresholds"] = ["risk"],
     };
 
     [Fact]

@@ -42,6 +42,17 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
 
     public string ConnectionString => $"Data Source={_databasePath}";
 
+    /// <summary>
+    /// Every test client sends <c>Expect: 100-continue</c>, so the server can refuse a body by its
+    /// declared length (413) or refuse the request (401/403) before the body is sent, as real
+    /// clients of bulk routes should; otherwise the refusal races the upload.
+    /// </summary>
+    protected override void ConfigureClient(HttpClient client)
+    {
+        base.ConfigureClient(client);
+        client.DefaultRequestHeaders.ExpectContinue = true;
+    }
+
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
         builder.UseEnvironment(_environment);
