@@ -144,12 +144,20 @@ public sealed class DemoScenario(HttpClient http, DemoKeys keys, DemoOptions opt
     private static List<OutcomeReading> Outcomes(Random random, List<SimulatedApplication> applications, HashSet<string> approved, DateOnly today)
     {
         var readings = new List<OutcomeReading>();
-        foreach (var a in applications.Where(a => approved.Contains(a.Id)))
+        foreach (var a in applications)
         {
+            // Drawn for every application, booked or not, so the draws do not depend on which arm the service assigned.
             var windowEnd = a.Date.AddMonths(12);
             var goesBad = random.NextDouble() < a.ProbabilityOfBad;
             var monthOfBad = 3 + random.Next(10);
             var stray = random.NextDouble() < 0.05;
+            var severity = random.Next(60);
+            var mild = random.Next(2) * random.Next(30);
+            if (!approved.Contains(a.Id))
+            {
+                continue;
+            }
+
             if (goesBad)
             {
                 var warning = a.Date.AddMonths(monthOfBad - 2);
@@ -161,7 +169,7 @@ public sealed class DemoScenario(HttpClient http, DemoKeys keys, DemoOptions opt
 
                 if (bad <= today)
                 {
-                    readings.Add(new(a.Id, bad, 90 + random.Next(60)));
+                    readings.Add(new(a.Id, bad, 90 + severity));
                 }
                 else if (warning < today)
                 {
@@ -170,7 +178,7 @@ public sealed class DemoScenario(HttpClient http, DemoKeys keys, DemoOptions opt
             }
             else if (windowEnd <= today)
             {
-                readings.Add(new(a.Id, windowEnd, stray ? 30 + random.Next(60) : random.Next(2) * random.Next(30)));
+                readings.Add(new(a.Id, windowEnd, stray ? 30 + severity : mild));
             }
             else if (a.Date < today)
             {

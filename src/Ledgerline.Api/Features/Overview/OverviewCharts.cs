@@ -125,7 +125,10 @@ public static class OverviewCharts
         var top = Math.Max(thresholds.CsiRed * 1.3, series.SelectMany(s => s.Values).Select(p => p ?? 0).DefaultIfEmpty(0).Max() * 1.1);
         var chart = new BarChart("csi", $"Characteristic stability index per characteristic in {latest}",
             "Characteristic", names, new ChartAxis("CSI against development", 0, Math.Ceiling(top * 20) / 20, v => Figures.Number(v, 2)), series)
-        { Bands = Bands(thresholds.CsiAmber, thresholds.CsiRed, top) };
+        {
+            Bands = Bands(thresholds.CsiAmber, thresholds.CsiRed, top),
+            Area = PlotArea.Standard with { Height = 400, Bottom = 112 },
+        };
         var headers = new List<string> { "Characteristic" };
         headers.AddRange(withStability.Select(v => $"CSI {v.Label}"));
         var table = new HtmlTable($"CSI per characteristic, {latest} (— where the version does not use it)", [.. headers]);

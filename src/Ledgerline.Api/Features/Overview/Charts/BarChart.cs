@@ -30,6 +30,9 @@ public sealed record BarChart(string Id, string Title, string CategoryLabel, IRe
         var slot = (Area.PlotRight - Area.PlotLeft) / Math.Max(1, Categories.Count);
         var groupWidth = slot * 0.78;
         var barWidth = Stacked ? groupWidth : groupWidth / Math.Max(1, Series.Count);
+
+        // Labels wider than their slot are turned, so long characteristic names do not run into each other.
+        var rotate = Categories.Where((_, i) => i % LabelEvery == 0).Any(c => c.Length * 6.6 > slot * LabelEvery);
         for (var c = 0; c < Categories.Count; c++)
         {
             var groupLeft = Area.PlotLeft + (c * slot) + ((slot - groupWidth) / 2);
@@ -48,12 +51,20 @@ public sealed record BarChart(string Id, string Title, string CategoryLabel, IRe
                 var top = y.Map(Math.Min(Math.Max(from, to), Y.Max));
                 var bottom = y.Map(Math.Min(from, to));
                 canvas.Rect(left, top, barWidth - (Stacked ? 0 : 1), bottom - top, Series[s].Colour,
-                    $"{Categories[c]}, {Series[s].Name}: {Y.Format(value)}");
+                    $"{Categories[c]}, {Series[s].Name}: {Y.Format(value)}", value);
             }
 
             if (c % LabelEvery == 0)
             {
-                canvas.Text(Area.PlotLeft + (c * slot) + (slot / 2), Area.PlotBottom + 18, Categories[c]);
+                var x = Area.PlotLeft + (c * slot) + (slot / 2);
+                if (rotate)
+                {
+                    canvas.Text(x + 4, Area.PlotBottom + 14, Categories[c], "end", rotate: -35);
+                }
+                else
+                {
+                    canvas.Text(x, Area.PlotBottom + 18, Categories[c]);
+                }
             }
         }
 

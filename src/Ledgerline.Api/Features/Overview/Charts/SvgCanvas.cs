@@ -34,9 +34,11 @@ public sealed class SvgCanvas
         _svg.Append(CultureInfo.InvariantCulture,
             $"<line x1=\"{N(x1)}\" y1=\"{N(y1)}\" x2=\"{N(x2)}\" y2=\"{N(y2)}\" stroke=\"{colour}\" stroke-width=\"{N(width)}\"{Dash(dash)}/>");
 
-    public void Rect(double x, double y, double width, double height, string colour, string? label = null)
+    /// <summary>A rectangle; <paramref name="value"/> marks it as a data bar (not a background band) for readers and tests.</summary>
+    public void Rect(double x, double y, double width, double height, string colour, string? label = null, double? value = null)
     {
-        _svg.Append(CultureInfo.InvariantCulture, $"<rect x=\"{N(x)}\" y=\"{N(y)}\" width=\"{N(Math.Max(0, width))}\" height=\"{N(Math.Max(0, height))}\" fill=\"{colour}\"");
+        var data = value is { } v ? $" data-value=\"{v.ToString("R", CultureInfo.InvariantCulture)}\"" : "";
+        _svg.Append(CultureInfo.InvariantCulture, $"<rect x=\"{N(x)}\" y=\"{N(y)}\" width=\"{N(Math.Max(0, width))}\" height=\"{N(Math.Max(0, height))}\" fill=\"{colour}\"{data}");
         _svg.Append(label is null ? "/>" : $"><title>{Encode(label)}</title></rect>");
     }
 
