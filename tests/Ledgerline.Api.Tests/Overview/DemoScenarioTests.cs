@@ -44,7 +44,7 @@ public sealed class DemoScenarioTests
         using var record = JsonDocument.Parse(await client.GetStringAsync($"/scorecards/personal-loan-application/decisions/{applicationId}"));
         var root = record.RootElement;
         var scores = root.GetProperty("otherScores").EnumerateArray().Select(s => (Version: s.GetProperty("version").GetInt32(), Score: s.GetProperty("score").GetDecimal()))
-            .Append((root.GetProperty("version").GetInt32(), root.GetProperty("score").GetDecimal()))
+            .Append((Version: root.GetProperty("version").GetInt32(), Score: root.GetProperty("score").GetDecimal()))
             .OrderBy(s => s.Version);
         return root.GetProperty("applicationDate").GetString() + " " + string.Join(", ", scores.Select(s => $"v{s.Version}={s.Score}"));
     }
