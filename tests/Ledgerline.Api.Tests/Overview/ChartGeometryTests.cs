@@ -47,6 +47,15 @@ public sealed class ChartGeometryTests
     }
 
     [Fact]
+    public void Ticks_DomainBelowZero_NeverGivesNegativeZero()
+    {
+        var ticks = new LinearScale(-0.3, 0.3, 0, 100).Ticks(6);
+
+        Assert.Contains(ticks, t => t == 0);
+        Assert.DoesNotContain(ticks, t => t == 0 && double.IsNegative(t));
+    }
+
+    [Fact]
     public void NiceDomain_RaggedScores_WidensToRoundEnds()
     {
         var (min, max) = LinearScale.NiceDomain(512.3, 688.9, 6);

@@ -25,8 +25,9 @@ public readonly record struct LinearScale(double DomainMin, double DomainMax, do
         var ticks = new List<double>();
         for (var value = first; value <= DomainMax + (step * 1e-9); value += step)
         {
-            // Snap so 0.30000000000000004 prints as 0.3 and zero is exactly zero.
-            ticks.Add(Math.Round(value / step) * step);
+            // Snap so 0.30000000000000004 prints as 0.3, and so zero is never negative zero ("-0.00").
+            var snapped = Math.Round(value / step) * step;
+            ticks.Add(snapped == 0 ? 0 : snapped);
         }
 
         return ticks;
