@@ -2,14 +2,17 @@ using Ledgerline.Api.Data;
 using Ledgerline.Api.Features.Access;
 using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Features.Decisions;
+using Ledgerline.Api.Features.Demo;
 using Ledgerline.Api.Features.Outcomes;
+using Ledgerline.Api.Features.Overview;
 using Ledgerline.Api.Features.Reports;
 using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Api.Features.Traffic;
 using Ledgerline.Api.Http;
 
-var builder = WebApplication.CreateBuilder(args);
+var builder = WebApplication.CreateBuilder(DemoRegistration.Arguments(args));
 
+builder.AddLedgerlineDemo();
 builder.AddLedgerlineData();
 builder.Services.AddSingleton(TimeProvider.System);
 builder.Services.AddLedgerlineHttp();
@@ -33,6 +36,7 @@ app.MapTraffic();
 app.MapDecisions();
 app.MapOutcomes();
 app.MapReports();
+app.MapOverview();
 app.MapAccess();
 app.MapAudit();
 app.MapHealthChecks("/health").AllowAnonymous();
