@@ -55,6 +55,7 @@ public sealed partial class RouteAccessTests
         ["POST /scorecards/{key}/alerts/evaluation"] = ["risk"],
         ["GET /scorecards/{key}/alert-thresholds"] = ["risk", "analyst"],
         ["PUT /scorecards/{key}/alert-thresholds"] = ["risk"],
+        ["GET /scorecards/{key}/reports/overview"] = ["analyst", "risk"],
     };
 
     [Fact]
