@@ -1,0 +1,218 @@
+using System.Data.Common;
+using System.Threading.Channels;
+using Ledgerline.Api.Data;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Infrastructure;
+using Microsoft.EntityFrameworkCore.Metadata;
+using Microsoft.EntityFrameworkCore.Storage;
+
+namespace Ledgerline.Api.Features.Decisions;
+
+/// <summary>
+/// Group commit for the decision log. Requests hand their scored decision to one writer, which
+/// takes everything waiting, writes it in one transaction and completes each request only after
+/// the commit. Concurrent requests thus share one durable commit (one fsync under SQLite's
+/// synchronous=FULL) instead of paying one each.
+/// </summary>
+/// <remarks>
+/// Inserts are plain parameterised SQL built from the EF model (table, column names and value
+/// conversions come from the model, so SQLite and PostgreSQL both work). <c>ON CONFLICT DO
+/// NOTHING</c> (SQLite 3.24+, PostgreSQL 9.5+) turns a unique-index collision — a duplicate
+/// idempotency key or application id, from this batch or from another instance — into "not
+/// inserted" for that one decision, without failing the others in the batch.
+/// </remarks>
+public sealed class DecisionWriter : IHostedService, IDisposable
+{
+    /// <summary>Most decisions per transaction; larger batches only lengthen the wait of the first.</summary>
+    public const int MaxBatch = 1024;
+
+    private readonly Channel<Pending> _queue = Channel.CreateUnbounded<Pending>(new UnboundedChannelOptions { SingleReader = true });
+    private readonly IServiceScopeFactory _scopes;
+    private readonly ILogger<DecisionWriter> _logger;
+    private Thread? _thread;
+
+    public DecisionWriter(IServiceScopeFactory scopes, ILogger<DecisionWriter> logger)
+    {
+        _scopes = scopes;
+        _logger = logger;
+    }
+
+    /// <summary>
+    /// Logs decisions durably. Each task completes after the commit that holds its decision: true
+    /// when it was inserted, false when a decision with its idempotency key or application id
+    /// already existed (the caller resolves that as a replay or a conflict).
+    /// </summary>
+    public Task<bool> WriteAsync(Decision decision)
+    {
+        var pending = new Pending(decision);
+        if (!_queue.Writer.TryWrite(pending))
+        {
+            throw new InvalidOperationException("The decision log is shutting down; retry on another instance.");
+        }
+
+        return pending.Done.Task;
+    }
+
+    public Task StartAsync(CancellationToken cancellationToken)
+    {
+        // A dedicated thread: commits block on fsync, and must not hold a thread-pool thread.
+        _thread = new Thread(Run) { IsBackground = true, Name = "decision-log-writer" };
+        _thread.Start();
+        return Task.CompletedTask;
+    }
+
+    public Task StopAsync(CancellationToken cancellationToken)
+    {
+        // Requests already queued are still written; the thread ends when the queue is empty.
+        _queue.Writer.TryComplete();
+        _thread?.Join(TimeSpan.FromSeconds(10));
+        return Task.CompletedTask;
+    }
+
+    public void Dispose() => _queue.Writer.TryComplete();
+
+    private void Run()
+    {
+        var reader = _queue.Reader;
+        var batch = new List<Pending>(MaxBatch);
+        while (reader.WaitToReadAsync().AsTask().GetAwaiter().GetResult())
+        {
+            batch.Clear();
+            while (batch.Count < MaxBatch && reader.TryRead(out var item))
+            {
+                batch.Add(item);
+            }
+
+            try
+            {
+                var inserted = Write(batch);
+                for (var i = 0; i < batch.Count; i++)
+                {
+                    batch[i].Done.TrySetResult(inserted[i]);
+                }
+            }
+            catch (Exception e) when (e is DbException or InvalidOperationException)
+            {
+                _logger.LogError(e, "Writing {Count} decisions failed; none of them was committed", batch.Count);
+                foreach (var item in batch)
+                {
+                    item.Done.TrySetException(e);
+                }
+            }
+        }
+    }
+
+    private bool[] Write(List<Pending> batch)
+    {
+        using var scope = _scopes.CreateScope();
+        var db = scope.ServiceProvider.GetRequiredService<LedgerlineDbContext>();
+        var statements = InsertStatements.For(db);
+        db.Database.OpenConnection();
+        try
+        {
+            var connection = db.Database.GetDbConnection();
+            using var transaction = connection.BeginTransaction();
+            using var insertDecision = statements.Decision.CreateCommand(connection, transaction);
+            using var insertScore = statements.Score.CreateCommand(connection, transaction);
+            var inserted = new bool[batch.Count];
+            for (var i = 0; i < batch.Count; i++)
+            {
+                var decision = batch[i].Decision;
+                if (!statements.Decision.Execute(insertDecision, decision))
+                {
+                    continue;
+                }
+
+                inserted[i] = true;
+                foreach (var score in decision.Scores)
+                {
+                    statements.Score.Execute(insertScore, score);
+                }
+            }
+
+            transaction.Commit();
+            return inserted;
+        }
+        finally
+        {
+            db.Database.CloseConnection();
+        }
+    }
+
+    private sealed class Pending(Decision decision)
+    {
+        public Decision Decision { get; } = decision;
+
+        // Continuations run on the thread pool, never on the writer thread.
+        public TaskCompletionSource<bool> Done { get; } = new(TaskCreationOptions.RunContinuationsAsynchronously);
+    }
+
+    /// <summary>The two insert statements, built once per provider from the EF model.</summary>
+    private sealed class InsertStatements(InsertStatement decision, InsertStatement score)
+    {
+        private static InsertStatements? s_cached;
+
+        public InsertStatement Decision { get; } = decision;
+
+        public InsertStatement Score { get; } = score;
+
+        public static InsertStatements For(LedgerlineDbContext db)
+        {
+            var cached = s_cached;
+            if (cached is not null && cached.Decision.ProviderName == db.Database.ProviderName)
+            {
+                return cached;
+            }
+
+            var sql = db.GetService<ISqlGenerationHelper>();
+            cached = new InsertStatements(
+                new InsertStatement(db.Model.FindEntityType(typeof(Decision))!, sql, db.Database.ProviderName!),
+                new InsertStatement(db.Model.FindEntityType(typeof(DecisionScore))!, sql, db.Database.ProviderName!));
+            s_cached = cached;
+            return cached;
+        }
+    }
+
+    private sealed class InsertStatement
+    {
+        private readonly (IProperty Property, RelationalTypeMapping Mapping, string Name)[] _columns;
+        private readonly string _sql;
+
+        public InsertStatement(IEntityType entity, ISqlGenerationHelper sql, string providerName)
+        {
+            ProviderName = providerName;
+            // Integer keys are generated by the database; everything else comes from the entity.
+            _columns = entity.GetProperties()
+                .Where(p => !(p.IsPrimaryKey() && p.ClrType == typeof(long)))
+                .Select((p, i) => (p, p.GetRelationalTypeMapping(), $"@p{i}"))
+                .ToArray();
+            var table = sql.DelimitIdentifier(entity.GetTableName()!, entity.GetSchema());
+            var columns = string.Join(", ", _columns.Select(c => sql.DelimitIdentifier(c.Property.GetColumnName())));
+            var values = string.Join(", ", _columns.Select(c => c.Name));
+            _sql = $"INSERT INTO {table} ({columns}) VALUES ({values}) ON CONFLICT DO NOTHING";
+        }
+
+        public string ProviderName { get; }
+
+        public DbCommand CreateCommand(DbConnection connection, DbTransaction transaction)
+        {
+            var command = connection.CreateCommand();
+            command.Transaction = transaction;
+            command.CommandText = _sql;
+            return command;
+        }
+
+        /// <summary>Inserts one row; false when a unique index already held its key.</summary>
+        public bool Execute(DbCommand command, object entity)
+        {
+            command.Parameters.Clear();
+            foreach (var (property, mapping, name) in _columns)
+            {
+                var value = property.GetGetter().GetClrValueUsingContainingEntity(entity);
+                command.Parameters.Add(mapping.CreateParameter(command, name, value, property.IsNullable));
+            }
+
+            return command.ExecuteNonQuery() == 1;
+        }
+    }
+}
