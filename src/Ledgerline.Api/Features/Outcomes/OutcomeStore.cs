@@ -1,0 +1,95 @@
+using System.Data.Common;
+using Ledgerline.Api.Data;
+using Ledgerline.Api.Features.Decisions;
+using Microsoft.EntityFrameworkCore;
+using Microsoft.EntityFrameworkCore.Infrastructure;
+using Microsoft.EntityFrameworkCore.Metadata;
+using Microsoft.EntityFrameworkCore.Storage;
+
+namespace Ledgerline.Api.Features.Outcomes;
+
+/// <summary>
+/// Writes observations and decisions' current outcomes through two prepared commands inside the
+/// request's transaction: the bulk path cannot afford a tracked entity per row. Table names,
+/// column names and value conversions come from the EF model, so the SQL stays the model's on
+/// every provider.
+/// </summary>
+internal sealed class OutcomeStore : IAsyncDisposable
+{
+    private readonly DbCommand _insert;
+    private readonly RelationalTypeMapping[] _insertTypes;
+    private readonly DbCommand _update;
+    private readonly RelationalTypeMapping[] _updateTypes;
+
+    private OutcomeStore(DbCommand insert, RelationalTypeMapping[] insertTypes, DbCommand update, RelationalTypeMapping[] updateTypes)
+    {
+        _insert = insert;
+        _insertTypes = insertTypes;
+        _update = update;
+        _updateTypes = updateTypes;
+    }
+
+    /// <summary>Prepares the commands on the context's open connection and current transaction.</summary>
+    public static OutcomeStore Create(LedgerlineDbContext db)
+    {
+        var sql = db.GetService<ISqlGenerationHelper>();
+        var connection = db.Database.GetDbConnection();
+        var transaction = db.Database.CurrentTransaction?.GetDbTransaction()
+            ?? throw new InvalidOperationException("Outcomes are written inside a transaction.");
+
+        var outcome = db.Model.FindEntityType(typeof(OutcomeObservation))!;
+        string[] insertColumns =
+        [
+            nameof(OutcomeObservation.DecisionId), nameof(OutcomeObservation.ObservedAt), nameof(OutcomeObservation.WorstDaysPastDue),
+            nameof(OutcomeObservation.ChargedOff), nameof(OutcomeObservation.Status), nameof(OutcomeObservation.Classified),
+            nameof(OutcomeObservation.ReceivedAt),
+        ];
+        var (insert, insertTypes) = Prepare(connection, transaction, outcome, insertColumns, columns =>
+            $"INSERT INTO {sql.DelimitIdentifier(outcome.GetTableName()!)} ({string.Join(", ", columns.Select(sql.DelimitIdentifier))}) " +
+            $"VALUES ({string.Join(", ", columns.Select((_, i) => sql.GenerateParameterName($"p{i}")))})");
+
+        var decision = db.Model.FindEntityType(typeof(Decision))!;
+        string[] updateColumns = [nameof(Decision.Outcome), nameof(Decision.Matured), nameof(Decision.OutcomeObservedAt), nameof(Decision.Id)];
+        var (update, updateTypes) = Prepare(connection, transaction, decision, updateColumns, columns =>
+            $"UPDATE {sql.DelimitIdentifier(decision.GetTableName()!)} SET " +
+            string.Join(", ", columns.Take(3).Select((c, i) => $"{sql.DelimitIdentifier(c)} = {sql.GenerateParameterName($"p{i}")}")) +
+            $" WHERE {sql.DelimitIdentifier(columns[3])} = {sql.GenerateParameterName("p3")}");
+
+        return new OutcomeStore(insert, insertTypes, update, updateTypes);
+    }
+
+    public Task InsertAsync(OutcomeObservation o, CancellationToken ct) =>
+        ExecuteAsync(_insert, _insertTypes, ct, o.DecisionId, o.ObservedAt, o.WorstDaysPastDue, o.ChargedOff, o.Status, o.Classified, o.ReceivedAt);
+
+    public Task UpdateDecisionAsync(Guid decisionId, OutcomeClass outcome, bool matured, DateOnly observedAt, CancellationToken ct) =>
+        ExecuteAsync(_update, _updateTypes, ct, outcome, matured, observedAt, decisionId);
+
+    public async ValueTask DisposeAsync()
+    {
+        await _insert.DisposeAsync();
+        await _update.DisposeAsync();
+    }
+
+    private static (DbCommand Command, RelationalTypeMapping[] Types) Prepare(
+        DbConnection connection, DbTransaction transaction, IEntityType entity, string[] properties, Func<string[], string> text)
+    {
+        var table = StoreObjectIdentifier.Table(entity.GetTableName()!, entity.GetSchema());
+        var mapped = properties.Select(p => entity.FindProperty(p)!).ToArray();
+        var command = connection.CreateCommand();
+        command.Transaction = transaction;
+        command.CommandText = text(mapped.Select(p => p.GetColumnName(table)!).ToArray());
+        return (command, mapped.Select(p => (RelationalTypeMapping)p.GetRelationalTypeMapping()).ToArray());
+    }
+
+    private static async Task ExecuteAsync(DbCommand command, RelationalTypeMapping[] types, CancellationToken ct, params object?[] values)
+    {
+        // The type mapping applies the model's conversions (enum names, GUID and date text on SQLite).
+        command.Parameters.Clear();
+        for (var i = 0; i < values.Length; i++)
+        {
+            command.Parameters.Add(types[i].CreateParameter(command, $"p{i}", values[i], nullable: true));
+        }
+
+        await command.ExecuteNonQueryAsync(ct);
+    }
+}
