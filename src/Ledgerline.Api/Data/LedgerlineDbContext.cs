@@ -1,4 +1,5 @@
 using Ledgerline.Api.Features.Access;
+using Ledgerline.Api.Features.Alerts;
 using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Api.Features.Outcomes;
@@ -32,6 +33,12 @@ public abstract class LedgerlineDbContext(DbContextOptions options) : DbContext(
 
     public DbSet<AuditEntry> AuditEntries => Set<AuditEntry>();
 
+    public DbSet<Alert> Alerts => Set<Alert>();
+
+    public DbSet<AlertThresholds> AlertThresholds => Set<AlertThresholds>();
+
+    public DbSet<AlertDelivery> AlertDeliveries => Set<AlertDelivery>();
+
     protected override void OnModelCreating(ModelBuilder modelBuilder)
     {
         modelBuilder.ApplyConfiguration(new ScorecardConfiguration());
@@ -43,6 +50,9 @@ public abstract class LedgerlineDbContext(DbContextOptions options) : DbContext(
         modelBuilder.ApplyConfiguration(new OutcomeConfiguration());
         modelBuilder.ApplyConfiguration(new ApiKeyConfiguration());
         modelBuilder.Entity<AuditEntry>().HasIndex(e => e.At);
+        modelBuilder.ApplyConfiguration(new AlertConfiguration());
+        modelBuilder.ApplyConfiguration(new AlertThresholdsConfiguration());
+        modelBuilder.ApplyConfiguration(new AlertDeliveryConfiguration());
     }
 
     protected override void ConfigureConventions(ModelConfigurationBuilder configurationBuilder)

@@ -68,6 +68,155 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                     b.ToTable("ApiKeys");
                 });
 
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.Alert", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("bigint");
+
+                    NpgsqlPropertyBuilderExtensions.UseIdentityByDefaultColumn(b.Property<long>("Id"));
+
+                    b.Property<DateTimeOffset?>("ClosedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("Evidence")
+                        .IsRequired()
+                        .HasMaxLength(2000)
+                        .HasColumnType("character varying(2000)");
+
+                    b.Property<double>("Figure")
+                        .HasColumnType("double precision");
+
+                    b.Property<string>("Kind")
+                        .IsRequired()
+                        .HasMaxLength(32)
+                        .HasColumnType("character varying(32)");
+
+                    b.Property<DateTimeOffset>("LastSeenAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<DateTimeOffset>("OpenedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("Period")
+                        .IsRequired()
+                        .HasMaxLength(100)
+                        .HasColumnType("character varying(100)");
+
+                    b.Property<long>("ScorecardId")
+                        .HasColumnType("bigint");
+
+                    b.Property<string>("Severity")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("character varying(16)");
+
+                    b.Property<string>("Subject")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
+
+                    b.Property<double>("Threshold")
+                        .HasColumnType("double precision");
+
+                    b.Property<int>("Version")
+                        .HasColumnType("integer");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("ScorecardId", "ClosedAt");
+
+                    b.HasIndex("ScorecardId", "Kind", "Version", "Subject")
+                        .IsUnique()
+                        .HasFilter("\"ClosedAt\" IS NULL");
+
+                    b.ToTable("Alerts");
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.AlertDelivery", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("bigint");
+
+                    NpgsqlPropertyBuilderExtensions.UseIdentityByDefaultColumn(b.Property<long>("Id"));
+
+                    b.Property<bool>("Abandoned")
+                        .HasColumnType("boolean");
+
+                    b.Property<long>("AlertId")
+                        .HasColumnType("bigint");
+
+                    b.Property<int>("Attempts")
+                        .HasColumnType("integer");
+
+                    b.Property<int>("ClaimToken")
+                        .HasColumnType("integer");
+
+                    b.Property<DateTimeOffset?>("ClaimedUntil")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<DateTimeOffset?>("DeliveredAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("LastError")
+                        .HasMaxLength(1000)
+                        .HasColumnType("character varying(1000)");
+
+                    b.Property<DateTimeOffset>("NextAttemptAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("Payload")
+                        .IsRequired()
+                        .HasColumnType("text");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("AlertId");
+
+                    b.HasIndex("DeliveredAt", "NextAttemptAt");
+
+                    b.ToTable("AlertDeliveries");
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.AlertThresholds", b =>
+                {
+                    b.Property<long>("ScorecardId")
+                        .HasColumnType("bigint");
+
+                    b.Property<double>("AucDecline")
+                        .HasColumnType("double precision");
+
+                    b.Property<double>("CsiAmber")
+                        .HasColumnType("double precision");
+
+                    b.Property<double>("CsiRed")
+                        .HasColumnType("double precision");
+
+                    b.Property<double>("HosmerLemeshowP")
+                        .HasColumnType("double precision");
+
+                    b.Property<double>("PsiAmber")
+                        .HasColumnType("double precision");
+
+                    b.Property<double>("PsiRed")
+                        .HasColumnType("double precision");
+
+                    b.Property<double>("SampleRatioP")
+                        .HasColumnType("double precision");
+
+                    b.Property<DateTimeOffset?>("UpdatedAt")
+                        .HasColumnType("timestamp with time zone");
+
+                    b.Property<string>("UpdatedBy")
+                        .HasMaxLength(200)
+                        .HasColumnType("character varying(200)");
+
+                    b.HasKey("ScorecardId");
+
+                    b.ToTable("AlertThresholds");
+                });
+
             modelBuilder.Entity("Ledgerline.Api.Features.Audit.AuditEntry", b =>
                 {
                     b.Property<long>("Id")
@@ -449,6 +598,33 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                         .IsUnique();
 
                     b.ToTable("TrafficPlans");
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.Alert", b =>
+                {
+                    b.HasOne("Ledgerline.Api.Features.Scorecards.Scorecard", null)
+                        .WithMany()
+                        .HasForeignKey("ScorecardId")
+                        .OnDelete(DeleteBehavior.Cascade)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.AlertDelivery", b =>
+                {
+                    b.HasOne("Ledgerline.Api.Features.Alerts.Alert", null)
+                        .WithMany()
+                        .HasForeignKey("AlertId")
+                        .OnDelete(DeleteBehavior.Cascade)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.AlertThresholds", b =>
+                {
+                    b.HasOne("Ledgerline.Api.Features.Scorecards.Scorecard", null)
+                        .WithOne()
+                        .HasForeignKey("Ledgerline.Api.Features.Alerts.AlertThresholds", "ScorecardId")
+                        .OnDelete(DeleteBehavior.Cascade)
+                        .IsRequired();
                 });
 
             modelBuilder.Entity("Ledgerline.Api.Features.Decisions.Decision", b =>

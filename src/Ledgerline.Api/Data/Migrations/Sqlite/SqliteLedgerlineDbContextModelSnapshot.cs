@@ -63,6 +63,151 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                     b.ToTable("ApiKeys");
                 });
 
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.Alert", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateTimeOffset?>("ClosedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Evidence")
+                        .IsRequired()
+                        .HasMaxLength(2000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double>("Figure")
+                        .HasColumnType("REAL");
+
+                    b.Property<string>("Kind")
+                        .IsRequired()
+                        .HasMaxLength(32)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset>("LastSeenAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset>("OpenedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Period")
+                        .IsRequired()
+                        .HasMaxLength(100)
+                        .HasColumnType("TEXT");
+
+                    b.Property<long>("ScorecardId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Severity")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Subject")
+                        .IsRequired()
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.Property<double>("Threshold")
+                        .HasColumnType("REAL");
+
+                    b.Property<int>("Version")
+                        .HasColumnType("INTEGER");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("ScorecardId", "ClosedAt");
+
+                    b.HasIndex("ScorecardId", "Kind", "Version", "Subject")
+                        .IsUnique()
+                        .HasFilter("\"ClosedAt\" IS NULL");
+
+                    b.ToTable("Alerts");
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.AlertDelivery", b =>
+                {
+                    b.Property<long>("Id")
+                        .ValueGeneratedOnAdd()
+                        .HasColumnType("INTEGER");
+
+                    b.Property<bool>("Abandoned")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<long>("AlertId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<int>("Attempts")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<int>("ClaimToken")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<DateTimeOffset?>("ClaimedUntil")
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset?>("DeliveredAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("LastError")
+                        .HasMaxLength(1000)
+                        .HasColumnType("TEXT");
+
+                    b.Property<DateTimeOffset>("NextAttemptAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("Payload")
+                        .IsRequired()
+                        .HasColumnType("TEXT");
+
+                    b.HasKey("Id");
+
+                    b.HasIndex("AlertId");
+
+                    b.HasIndex("DeliveredAt", "NextAttemptAt");
+
+                    b.ToTable("AlertDeliveries");
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.AlertThresholds", b =>
+                {
+                    b.Property<long>("ScorecardId")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<double>("AucDecline")
+                        .HasColumnType("REAL");
+
+                    b.Property<double>("CsiAmber")
+                        .HasColumnType("REAL");
+
+                    b.Property<double>("CsiRed")
+                        .HasColumnType("REAL");
+
+                    b.Property<double>("HosmerLemeshowP")
+                        .HasColumnType("REAL");
+
+                    b.Property<double>("PsiAmber")
+                        .HasColumnType("REAL");
+
+                    b.Property<double>("PsiRed")
+                        .HasColumnType("REAL");
+
+                    b.Property<double>("SampleRatioP")
+                        .HasColumnType("REAL");
+
+                    b.Property<DateTimeOffset?>("UpdatedAt")
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("UpdatedBy")
+                        .HasMaxLength(200)
+                        .HasColumnType("TEXT");
+
+                    b.HasKey("ScorecardId");
+
+                    b.ToTable("AlertThresholds");
+                });
+
             modelBuilder.Entity("Ledgerline.Api.Features.Audit.AuditEntry", b =>
                 {
                     b.Property<long>("Id")
@@ -432,6 +577,33 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                         .IsUnique();
 
                     b.ToTable("TrafficPlans");
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.Alert", b =>
+                {
+                    b.HasOne("Ledgerline.Api.Features.Scorecards.Scorecard", null)
+                        .WithMany()
+                        .HasForeignKey("ScorecardId")
+                        .OnDelete(DeleteBehavior.Cascade)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.AlertDelivery", b =>
+                {
+                    b.HasOne("Ledgerline.Api.Features.Alerts.Alert", null)
+                        .WithMany()
+                        .HasForeignKey("AlertId")
+                        .OnDelete(DeleteBehavior.Cascade)
+                        .IsRequired();
+                });
+
+            modelBuilder.Entity("Ledgerline.Api.Features.Alerts.AlertThresholds", b =>
+                {
+                    b.HasOne("Ledgerline.Api.Features.Scorecards.Scorecard", null)
+                        .WithOne()
+                        .HasForeignKey("Ledgerline.Api.Features.Alerts.AlertThresholds", "ScorecardId")
+                        .OnDelete(DeleteBehavior.Cascade)
+                        .IsRequired();
                 });
 
             modelBuilder.Entity("Ledgerline.Api.Features.Decisions.Decision", b =>

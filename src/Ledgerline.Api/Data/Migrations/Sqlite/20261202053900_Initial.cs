@@ -67,6 +67,62 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                 });
 
             migrationBuilder.CreateTable(
+                name: "AlertThresholds",
+                columns: table => new
+                {
+                    ScorecardId = table.Column<long>(type: "INTEGER", nullable: false),
+                    PsiAmber = table.Column<double>(type: "REAL", nullable: false),
+                    PsiRed = table.Column<double>(type: "REAL", nullable: false),
+                    CsiAmber = table.Column<double>(type: "REAL", nullable: false),
+                    CsiRed = table.Column<double>(type: "REAL", nullable: false),
+                    AucDecline = table.Column<double>(type: "REAL", nullable: false),
+                    HosmerLemeshowP = table.Column<double>(type: "REAL", nullable: false),
+                    SampleRatioP = table.Column<double>(type: "REAL", nullable: false),
+                    UpdatedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true),
+                    UpdatedBy = table.Column<string>(type: "TEXT", maxLength: 200, nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_AlertThresholds", x => x.ScorecardId);
+                    table.ForeignKey(
+                        name: "FK_AlertThresholds_Scorecards_ScorecardId",
+                        column: x => x.ScorecardId,
+                        principalTable: "Scorecards",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "Alerts",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    ScorecardId = table.Column<long>(type: "INTEGER", nullable: false),
+                    Kind = table.Column<string>(type: "TEXT", maxLength: 32, nullable: false),
+                    Version = table.Column<int>(type: "INTEGER", nullable: false),
+                    Subject = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    Period = table.Column<string>(type: "TEXT", maxLength: 100, nullable: false),
+                    Severity = table.Column<string>(type: "TEXT", maxLength: 16, nullable: false),
+                    Figure = table.Column<double>(type: "REAL", nullable: false),
+                    Threshold = table.Column<double>(type: "REAL", nullable: false),
+                    Evidence = table.Column<string>(type: "TEXT", maxLength: 2000, nullable: false),
+                    OpenedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    LastSeenAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    ClosedAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_Alerts", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_Alerts_Scorecards_ScorecardId",
+                        column: x => x.ScorecardId,
+                        principalTable: "Scorecards",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
                 name: "Decisions",
                 columns: table => new
                 {
@@ -157,6 +213,33 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                 });
 
             migrationBuilder.CreateTable(
+                name: "AlertDeliveries",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "INTEGER", nullable: false)
+                        .Annotation("Sqlite:Autoincrement", true),
+                    AlertId = table.Column<long>(type: "INTEGER", nullable: false),
+                    Payload = table.Column<string>(type: "TEXT", nullable: false),
+                    Attempts = table.Column<int>(type: "INTEGER", nullable: false),
+                    NextAttemptAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
+                    ClaimedUntil = table.Column<DateTimeOffset>(type: "TEXT", nullable: true),
+                    ClaimToken = table.Column<int>(type: "INTEGER", nullable: false),
+                    DeliveredAt = table.Column<DateTimeOffset>(type: "TEXT", nullable: true),
+                    Abandoned = table.Column<bool>(type: "INTEGER", nullable: false),
+                    LastError = table.Column<string>(type: "TEXT", maxLength: 1000, nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_AlertDeliveries", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_AlertDeliveries_Alerts_AlertId",
+                        column: x => x.AlertId,
+                        principalTable: "Alerts",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
                 name: "DecisionScores",
                 columns: table => new
                 {
@@ -230,6 +313,28 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                 });
 
             migrationBuilder.CreateIndex(
+                name: "IX_AlertDeliveries_AlertId",
+                table: "AlertDeliveries",
+                column: "AlertId");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_AlertDeliveries_DeliveredAt_NextAttemptAt",
+                table: "AlertDeliveries",
+                columns: new[] { "DeliveredAt", "NextAttemptAt" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Alerts_ScorecardId_ClosedAt",
+                table: "Alerts",
+                columns: new[] { "ScorecardId", "ClosedAt" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Alerts_ScorecardId_Kind_Version_Subject",
+                table: "Alerts",
+                columns: new[] { "ScorecardId", "Kind", "Version", "Subject" },
+                unique: true,
+                filter: "\"ClosedAt\" IS NULL");
+
+            migrationBuilder.CreateIndex(
                 name: "IX_ApiKeys_SecretHash",
                 table: "ApiKeys",
                 column: "SecretHash",
@@ -301,6 +406,12 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
         protected override void Down(MigrationBuilder migrationBuilder)
         {
             migrationBuilder.DropTable(
+                name: "AlertDeliveries");
+
+            migrationBuilder.DropTable(
+                name: "AlertThresholds");
+
+            migrationBuilder.DropTable(
                 name: "ApiKeys");
 
             migrationBuilder.DropTable(
@@ -317,6 +428,9 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
 
             migrationBuilder.DropTable(
                 name: "TrafficPlans");
+
+            migrationBuilder.DropTable(
+                name: "Alerts");
 
             migrationBuilder.DropTable(
                 name: "Versions");

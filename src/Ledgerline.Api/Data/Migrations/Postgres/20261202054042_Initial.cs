@@ -68,6 +68,62 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                 });
 
             migrationBuilder.CreateTable(
+                name: "AlertThresholds",
+                columns: table => new
+                {
+                    ScorecardId = table.Column<long>(type: "bigint", nullable: false),
+                    PsiAmber = table.Column<double>(type: "double precision", nullable: false),
+                    PsiRed = table.Column<double>(type: "double precision", nullable: false),
+                    CsiAmber = table.Column<double>(type: "double precision", nullable: false),
+                    CsiRed = table.Column<double>(type: "double precision", nullable: false),
+                    AucDecline = table.Column<double>(type: "double precision", nullable: false),
+                    HosmerLemeshowP = table.Column<double>(type: "double precision", nullable: false),
+                    SampleRatioP = table.Column<double>(type: "double precision", nullable: false),
+                    UpdatedAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: true),
+                    UpdatedBy = table.Column<string>(type: "character varying(200)", maxLength: 200, nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_AlertThresholds", x => x.ScorecardId);
+                    table.ForeignKey(
+                        name: "FK_AlertThresholds_Scorecards_ScorecardId",
+                        column: x => x.ScorecardId,
+                        principalTable: "Scorecards",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
+                name: "Alerts",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "bigint", nullable: false)
+                        .Annotation("Npgsql:ValueGenerationStrategy", NpgsqlValueGenerationStrategy.IdentityByDefaultColumn),
+                    ScorecardId = table.Column<long>(type: "bigint", nullable: false),
+                    Kind = table.Column<string>(type: "character varying(32)", maxLength: 32, nullable: false),
+                    Version = table.Column<int>(type: "integer", nullable: false),
+                    Subject = table.Column<string>(type: "character varying(200)", maxLength: 200, nullable: false),
+                    Period = table.Column<string>(type: "character varying(100)", maxLength: 100, nullable: false),
+                    Severity = table.Column<string>(type: "character varying(16)", maxLength: 16, nullable: false),
+                    Figure = table.Column<double>(type: "double precision", nullable: false),
+                    Threshold = table.Column<double>(type: "double precision", nullable: false),
+                    Evidence = table.Column<string>(type: "character varying(2000)", maxLength: 2000, nullable: false),
+                    OpenedAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: false),
+                    LastSeenAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: false),
+                    ClosedAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_Alerts", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_Alerts_Scorecards_ScorecardId",
+                        column: x => x.ScorecardId,
+                        principalTable: "Scorecards",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
                 name: "Decisions",
                 columns: table => new
                 {
@@ -158,6 +214,33 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                 });
 
             migrationBuilder.CreateTable(
+                name: "AlertDeliveries",
+                columns: table => new
+                {
+                    Id = table.Column<long>(type: "bigint", nullable: false)
+                        .Annotation("Npgsql:ValueGenerationStrategy", NpgsqlValueGenerationStrategy.IdentityByDefaultColumn),
+                    AlertId = table.Column<long>(type: "bigint", nullable: false),
+                    Payload = table.Column<string>(type: "text", nullable: false),
+                    Attempts = table.Column<int>(type: "integer", nullable: false),
+                    NextAttemptAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: false),
+                    ClaimedUntil = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: true),
+                    ClaimToken = table.Column<int>(type: "integer", nullable: false),
+                    DeliveredAt = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: true),
+                    Abandoned = table.Column<bool>(type: "boolean", nullable: false),
+                    LastError = table.Column<string>(type: "character varying(1000)", maxLength: 1000, nullable: true)
+                },
+                constraints: table =>
+                {
+                    table.PrimaryKey("PK_AlertDeliveries", x => x.Id);
+                    table.ForeignKey(
+                        name: "FK_AlertDeliveries_Alerts_AlertId",
+                        column: x => x.AlertId,
+                        principalTable: "Alerts",
+                        principalColumn: "Id",
+                        onDelete: ReferentialAction.Cascade);
+                });
+
+            migrationBuilder.CreateTable(
                 name: "DecisionScores",
                 columns: table => new
                 {
@@ -231,6 +314,28 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                 });
 
             migrationBuilder.CreateIndex(
+                name: "IX_AlertDeliveries_AlertId",
+                table: "AlertDeliveries",
+                column: "AlertId");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_AlertDeliveries_DeliveredAt_NextAttemptAt",
+                table: "AlertDeliveries",
+                columns: new[] { "DeliveredAt", "NextAttemptAt" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Alerts_ScorecardId_ClosedAt",
+                table: "Alerts",
+                columns: new[] { "ScorecardId", "ClosedAt" });
+
+            migrationBuilder.CreateIndex(
+                name: "IX_Alerts_ScorecardId_Kind_Version_Subject",
+                table: "Alerts",
+                columns: new[] { "ScorecardId", "Kind", "Version", "Subject" },
+                unique: true,
+                filter: "\"ClosedAt\" IS NULL");
+
+            migrationBuilder.CreateIndex(
                 name: "IX_ApiKeys_SecretHash",
                 table: "ApiKeys",
                 column: "SecretHash",
@@ -302,6 +407,12 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
         protected override void Down(MigrationBuilder migrationBuilder)
         {
             migrationBuilder.DropTable(
+                name: "AlertDeliveries");
+
+            migrationBuilder.DropTable(
+                name: "AlertThresholds");
+
+            migrationBuilder.DropTable(
                 name: "ApiKeys");
 
             migrationBuilder.DropTable(
@@ -318,6 +429,9 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
 
             migrationBuilder.DropTable(
                 name: "TrafficPlans");
+
+            migrationBuilder.DropTable(
+                name: "Alerts");
 
             migrationBuilder.DropTable(
                 name: "Versions");
