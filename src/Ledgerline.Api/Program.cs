@@ -1,5 +1,6 @@
 using Ledgerline.Api.Data;
 using Ledgerline.Api.Features.Access;
+using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Api.Features.Outcomes;
 using Ledgerline.Api.Features.Reports;
@@ -24,6 +25,7 @@ var app = builder.Build();
 
 app.UseLedgerlineHttp();
 app.UseAuthentication();
+app.UseLedgerlineLimits();
 app.UseAuthorization();
 
 app.MapScorecardRegistry();
@@ -32,6 +34,7 @@ app.MapDecisions();
 app.MapOutcomes();
 app.MapReports();
 app.MapAccess();
+app.MapAudit();
 app.MapHealthChecks("/health").AllowAnonymous();
 
 await app.MigrateLedgerlineDatabaseAsync();

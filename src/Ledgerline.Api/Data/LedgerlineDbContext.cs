@@ -49,11 +49,20 @@ public abstract class LedgerlineDbContext(DbContextOptions options) : DbContext(
         modelBuilder.ApplyConfiguration(new DecisionScoreConfiguration());
         modelBuilder.ApplyConfiguration(new OutcomeConfiguration());
         modelBuilder.ApplyConfiguration(new ApiKeyConfiguration());
-        modelBuilder.Entity<AuditEntry>().HasIndex(e => e.At);
         modelBuilder.ApplyConfiguration(new AlertConfiguration());
         modelBuilder.ApplyConfiguration(new AlertThresholdsConfiguration());
         modelBuilder.ApplyConfiguration(new AlertDeliveryConfiguration());
+        modelBuilder.ApplyConfiguration(new AuditEntryConfiguration());
     }
+
+    // A change that carries audit entries is saved with them linked onto the audit chain.
+    public override int SaveChanges(bool acceptAllChangesOnSuccess) =>
+        AuditChain.HasPending(this) ? AuditChain.Save(this, () => base.SaveChanges(acceptAllChangesOnSuccess)) : base.SaveChanges(acceptAllChangesOnSuccess);
+
+    public override Task<int> SaveChangesAsync(bool acceptAllChangesOnSuccess, CancellationToken cancellationToken = default) =>
+        AuditChain.HasPending(this)
+            ? AuditChain.SaveAsync(this, () => base.SaveChangesAsync(acceptAllChangesOnSuccess, cancellationToken), cancellationToken)
+            : base.SaveChangesAsync(acceptAllChangesOnSuccess, cancellationToken);
 
     protected override void ConfigureConventions(ModelConfigurationBuilder configurationBuilder)
     {

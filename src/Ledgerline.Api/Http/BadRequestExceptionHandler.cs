@@ -46,13 +46,12 @@ internal sealed class BadRequestExceptionHandler(IProblemDetailsService problems
         });
     }
 
-    public static string TooLargeDetail(HttpContext context) =>
-        $"The request body is over this route's limit of {DescribeLimit(context)}; split it into smaller requests.";
-
-    private static string DescribeLimit(HttpContext context)
+    /// <summary>What to do about a body over the limit; also used when the server refuses it before any handler runs.</summary>
+    public static string TooLargeDetail(HttpContext context)
     {
         var limit = context.Features.Get<Microsoft.AspNetCore.Http.Features.IHttpMaxRequestBodySizeFeature>()?.MaxRequestBodySize;
-        return limit is { } bytes ? $"{bytes:N0} bytes" : "the configured size";
+        var described = limit is { } bytes ? $"{bytes:N0} bytes" : "the configured size";
+        return $"The request body is over this route's limit of {described}; split it into smaller requests.";
     }
 
     private static string DescribeJsonError(JsonException json)

@@ -28,6 +28,7 @@ public static class HttpRegistration
         services.AddExceptionHandler<BadRequestExceptionHandler>();
         services.Configure<Microsoft.AspNetCore.Server.Kestrel.Core.KestrelServerOptions>(o => o.Limits.MaxRequestBodySize = DefaultBodyLimitBytes);
         services.AddLedgerlineOpenApi();
+        services.AddLedgerlineLimits();
         return services;
     }
 

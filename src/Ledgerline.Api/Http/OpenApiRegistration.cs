@@ -2,7 +2,10 @@ using Microsoft.OpenApi;
 
 namespace Ledgerline.Api.Http;
 
-/// <summary>Swashbuckle: the document is always served (tests compare it with openapi/); the UI only in Development.</summary>
+/// <summary>
+/// Swashbuckle: the document is always served, without a key (tests compare it with openapi/; it
+/// describes the API and holds no data); the UI only in Development.
+/// </summary>
 public static class OpenApiRegistration
 {
     public const string DocumentName = "v1";
@@ -28,6 +31,7 @@ public static class OpenApiRegistration
             {
                 [new OpenApiSecuritySchemeReference("bearer", document)] = [],
             });
+            o.DocumentFilter<HealthDocumentFilter>();
             o.SupportNonNullableReferenceTypes();
             o.CustomSchemaIds(t => t.FullName!
                 .Replace("Ledgerline.Api.Features.", string.Empty, StringComparison.Ordinal)

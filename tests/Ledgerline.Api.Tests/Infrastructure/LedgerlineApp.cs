@@ -2,7 +2,9 @@ using System.Net.Http.Headers;
 using System.Net.Http.Json;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Mvc.Testing;
+using Microsoft.AspNetCore.TestHost;
 using Microsoft.Data.Sqlite;
+using Microsoft.Extensions.DependencyInjection;
 
 namespace Ledgerline.Api.Tests.Infrastructure;
 
@@ -15,11 +17,18 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
 {
     private readonly string _databasePath = Path.Combine(Path.GetTempPath(), $"ledgerline-test-{Guid.NewGuid():N}.db");
     private readonly Dictionary<string, string?> _settings = [];
+    private readonly string _environment;
+    private readonly TimeProvider? _clock;
 
-    public LedgerlineApp(IDictionary<string, string?>? settings = null)
+    /// <param name="settings">Configuration to add, e.g. <c>Limits:PermitsPerSecond</c>.</param>
+    /// <param name="environment">The hosting environment; <c>Testing</c> unless a test checks environment-specific behaviour.</param>
+    /// <param name="clock">Replaces the system clock, for tests that move time.</param>
+    public LedgerlineApp(IDictionary<string, string?>? settings = null, string environment = "Testing", TimeProvider? clock = null)
     {
         // Real Kestrel on a loopback port, so server limits (body size, timeouts) apply as in production.
         UseKestrel(0);
+        _environment = environment;
+        _clock = clock;
         if (settings is not null)
         {
             foreach (var (k, v) in settings)
@@ -35,7 +44,12 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
 
     protected override void ConfigureWebHost(IWebHostBuilder builder)
     {
-        builder.UseEnvironment("Testing");
+        builder.UseEnvironment(_environment);
+        if (_clock is not null)
+        {
+            builder.ConfigureTestServices(services => services.AddSingleton(_clock));
+        }
+
         builder.UseSetting("ConnectionStrings:Ledgerline", ConnectionString);
         builder.UseSetting("Access:BootstrapAdminKey", AdminKey);
         foreach (var (k, v) in _settings)
@@ -62,6 +76,33 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
         var client = CreateClient();
         client.DefaultRequestHeaders.Authorization = new AuthenticationHeaderValue("Bearer", created!.Key);
         return client;
+    }
+
+    /// <summary>Creates a key through POST /access/keys with any body (roles, scorecards, expiry) and returns its id and secret.</summary>
+    public async Task<(Guid Id, string Key)> CreateKeyAsync(object body)
+    {
+        using var admin = AdminClient();
+        var response = await admin.PostAsJsonAsync("/access/keys", body);
+        response.EnsureSuccessStatusCode();
+        var created = await response.Content.ReadFromJsonAsync<CreatedKey>();
+        return (created!.Id, created.Key);
+    }
+
+    /// <summary>A client sending the given secret as its bearer key.</summary>
+    public HttpClient ClientWithKey(string key)
+    {
+        var client = CreateClient();
+        client.DefaultRequestHeaders.Authorization = new AuthenticationHeaderValue("Bearer", key);
+        return client;
+    }
+
+    /// <summary>Runs one SQL statement straight against the database file (to tamper with rows, as an attacker with file access could).</summary>
+    public int Execute(string sql)
+    {
+        using var connection = OpenDatabase();
+        using var command = connection.CreateCommand();
+        command.CommandText = sql;
+        return command.ExecuteNonQuery();
     }
 
     /// <summary>Opens the test's database directly, for checks that nothing was stored.</summary>

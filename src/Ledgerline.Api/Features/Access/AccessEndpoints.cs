@@ -5,6 +5,7 @@ using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Http;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Microsoft.EntityFrameworkCore;
+using Microsoft.Extensions.Caching.Memory;
 
 namespace Ledgerline.Api.Features.Access;
 
@@ -44,12 +45,13 @@ public static class AccessEndpoints
 
     public static async Task<Ok<List<KeyResponse>>> ListKeys(LedgerlineDbContext db, CancellationToken ct)
     {
-        var keys = await db.ApiKeys.AsNoTracking().OrderBy(k => k.CreatedAt).ToListAsync(ct);
-        return TypedResults.Ok(keys.Select(ToResponse).ToList());
+        // Sorted here: SQLite cannot order by a time with an offset, and keys are few.
+        var keys = await db.ApiKeys.AsNoTracking().ToListAsync(ct);
+        return TypedResults.Ok(keys.OrderBy(k => k.CreatedAt).ThenBy(k => k.Id).Select(ToResponse).ToList());
     }
 
     public static async Task<Results<NoContent, ProblemHttpResult>> RevokeKey(
-        Guid id, ClaimsPrincipal user, LedgerlineDbContext db, TimeProvider clock, CancellationToken ct)
+        Guid id, ClaimsPrincipal user, LedgerlineDbContext db, IMemoryCache cache, TimeProvider clock, CancellationToken ct)
     {
         var key = await db.ApiKeys.FirstOrDefaultAsync(k => k.Id == id, ct);
         if (key is null)
@@ -57,9 +59,15 @@ public static class AccessEndpoints
             return Problems.NotFound($"There is no key with id {id}.");
         }
 
-        key.RevokedAt ??= clock.GetUtcNow();
-        db.Record(Actor.Of(user), "key.revoked", $"keys/{key.Id}", new { key.Id, key.RevokedAt }, key.RevokedAt.Value);
-        await db.SaveChangesAsync(ct);
+        if (key.RevokedAt is null)
+        {
+            // Revoking twice changes nothing, so it records nothing either.
+            key.RevokedAt = clock.GetUtcNow();
+            db.Record(Actor.Of(user), "key.revoked", $"keys/{key.Id}", new { key.Id, key.RevokedAt }, key.RevokedAt.Value);
+            await db.SaveChangesAsync(ct);
+        }
+
+        ApiKeyAuthentication.Forget(cache, key.SecretHash);
         return TypedResults.NoContent();
     }
 

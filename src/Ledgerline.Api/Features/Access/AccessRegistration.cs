@@ -1,5 +1,6 @@
 using FluentValidation;
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Features.Audit;
 using Microsoft.AspNetCore.Authentication;
 using Microsoft.AspNetCore.Authorization;
 using Microsoft.EntityFrameworkCore;
@@ -16,6 +17,7 @@ public static class AccessRegistration
         services.AddAuthorizationBuilder()
             // Default deny: a route that names no roles admits nobody but an authenticated admin.
             .SetFallbackPolicy(new AuthorizationPolicyBuilder().RequireRole(Roles.Admin).Build());
+        services.AddSingleton<IAuthorizationMiddlewareResultHandler, AccessDeniedHandler>();
         services.AddOptions<AccessOptions>().BindConfiguration(AccessOptions.Section);
         services.AddSingleton<IValidator<CreateKeyRequest>, CreateKeyRequestValidator>();
         return services;
@@ -52,7 +54,7 @@ public static class AccessRegistration
             return;
         }
 
-        db.ApiKeys.Add(new ApiKey
+        var key = new ApiKey
         {
             Id = Guid.CreateVersion7(),
             Name = "bootstrap admin",
@@ -60,7 +62,9 @@ public static class AccessRegistration
             Roles = Roles.Admin,
             CreatedAt = app.Services.GetRequiredService<TimeProvider>().GetUtcNow(),
             CreatedBy = "configuration",
-        });
+        };
+        db.ApiKeys.Add(key);
+        db.Record(key.CreatedBy, "key.created", $"keys/{key.Id}", new { key.Name, key.Roles, key.Scorecards, key.ExpiresAt }, key.CreatedAt);
         try
         {
             await db.SaveChangesAsync();

@@ -35,21 +35,31 @@ internal sealed class ApiKeyAuthentication(
             return AuthenticateResult.NoResult();
         }
 
-        if (!header.StartsWith("Bearer ", StringComparison.OrdinalIgnoreCase) || header.Length <= 7)
+        if (!header.StartsWith("Bearer ", StringComparison.OrdinalIgnoreCase) || string.IsNullOrWhiteSpace(header[7..]))
         {
-            return AuthenticateResult.Fail("The Authorization header must be 'Bearer <key>'.");
+            return Fail("The Authorization header must be 'Bearer <key>'.");
         }
 
         var hash = HashSecret(header[7..].Trim());
-        var key = await cache.GetOrCreateAsync($"apikey:{hash}", async entry =>
+        var key = await cache.GetOrCreateAsync(CacheKey(hash), async entry =>
         {
             entry.AbsoluteExpirationRelativeToNow = TimeSpan.FromSeconds(CacheSeconds);
             return await db.ApiKeys.AsNoTracking().FirstOrDefaultAsync(k => k.SecretHash == hash, Context.RequestAborted);
         });
         var now = clock.GetUtcNow();
-        if (key is null || key.RevokedAt is not null || key.ExpiresAt <= now)
+        if (key is null)
         {
-            return AuthenticateResult.Fail("The key is unknown, revoked or expired.");
+            return Fail("The key is not known: check it was copied whole when it was created.");
+        }
+
+        if (key.RevokedAt is not null)
+        {
+            return Fail($"The key was revoked at {key.RevokedAt:O}; ask an administrator for a new one.");
+        }
+
+        if (key.ExpiresAt <= now)
+        {
+            return Fail($"The key expired at {key.ExpiresAt:O}; ask an administrator for a new one.");
         }
 
         var claims = new List<Claim>
@@ -65,6 +75,17 @@ internal sealed class ApiKeyAuthentication(
 
         var principal = new ClaimsPrincipal(new ClaimsIdentity(claims, SchemeName));
         return AuthenticateResult.Success(new AuthenticationTicket(principal, SchemeName));
+    }
+
+    /// <summary>Forgets a cached key on this instance at once (others within <see cref="CacheSeconds"/>).</summary>
+    public static void Forget(IMemoryCache cache, string secretHash) => cache.Remove(CacheKey(secretHash));
+
+    private static string CacheKey(string secretHash) => "apikey:" + secretHash;
+
+    private AuthenticateResult Fail(string reason)
+    {
+        Context.Features.Set(new ApiKeyFailure(reason));
+        return AuthenticateResult.Fail(reason);
     }
 
     public static string HashSecret(string secret) =>

@@ -16,7 +16,7 @@ public static class AuditTrail
         var bytes = JsonSerializer.SerializeToUtf8Bytes(content, JsonSerializerOptions.Web);
         db.AuditEntries.Add(new AuditEntry
         {
-            At = at,
+            At = at.UtcDateTime,
             Actor = actor,
             Action = action,
             Subject = subject,

@@ -24,7 +24,7 @@ public static class BaselineEndpoints
     {
         // Analysts attach baselines; analysts and risk managers read them.
         var group = routes.MapGroup("/scorecards/{key}/versions/{version:int}/baseline").WithTags("Versions").ForScorecardRoutes();
-        group.MapPut("/", PutBaseline).WithValidation<BaselineRequest>().WithBodyLimit(BaselineBodyLimitBytes).AllowRoles(Roles.Analyst);
+        group.MapPut("/", PutBaseline).WithValidation<BaselineRequest>().WithBodyLimit(BaselineBodyLimitBytes).WithRequestTimeout(LimitsRegistration.BulkTimeoutPolicy).AllowRoles(Roles.Analyst);
         group.MapGet("/", GetBaseline).AllowRoles(Roles.Analyst, Roles.Risk);
         return routes;
     }

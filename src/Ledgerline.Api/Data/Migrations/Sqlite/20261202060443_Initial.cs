@@ -36,11 +36,14 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                 {
                     Id = table.Column<long>(type: "INTEGER", nullable: false)
                         .Annotation("Sqlite:Autoincrement", true),
-                    At = table.Column<DateTimeOffset>(type: "TEXT", nullable: false),
-                    Actor = table.Column<string>(type: "TEXT", nullable: false),
-                    Action = table.Column<string>(type: "TEXT", nullable: false),
-                    Subject = table.Column<string>(type: "TEXT", nullable: false),
-                    ContentHash = table.Column<string>(type: "TEXT", nullable: false)
+                    Sequence = table.Column<long>(type: "INTEGER", nullable: false),
+                    At = table.Column<DateTime>(type: "TEXT", nullable: false),
+                    Actor = table.Column<string>(type: "TEXT", maxLength: 200, nullable: false),
+                    Action = table.Column<string>(type: "TEXT", maxLength: 100, nullable: false),
+                    Subject = table.Column<string>(type: "TEXT", maxLength: 300, nullable: false),
+                    ContentHash = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
+                    PreviousHash = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false),
+                    EntryHash = table.Column<string>(type: "TEXT", maxLength: 64, nullable: false)
                 },
                 constraints: table =>
                 {
@@ -341,9 +344,25 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                 unique: true);
 
             migrationBuilder.CreateIndex(
+                name: "IX_AuditEntries_Actor",
+                table: "AuditEntries",
+                column: "Actor");
+
+            migrationBuilder.CreateIndex(
                 name: "IX_AuditEntries_At",
                 table: "AuditEntries",
                 column: "At");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_AuditEntries_Sequence",
+                table: "AuditEntries",
+                column: "Sequence",
+                unique: true);
+
+            migrationBuilder.CreateIndex(
+                name: "IX_AuditEntries_Subject",
+                table: "AuditEntries",
+                column: "Subject");
 
             migrationBuilder.CreateIndex(
                 name: "IX_DecisionScores_DecisionId",

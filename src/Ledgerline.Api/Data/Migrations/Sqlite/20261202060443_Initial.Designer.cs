@@ -11,7 +11,7 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace Ledgerline.Api.Data.Migrations.Sqlite
 {
     [DbContext(typeof(SqliteLedgerlineDbContext))]
-    [Migration("20261202053900_Initial")]
+    [Migration("20261202060443_Initial")]
     partial class Initial
     {
         /// <inheritdoc />
@@ -219,26 +219,50 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
 
                     b.Property<string>("Action")
                         .IsRequired()
+                        .HasMaxLength(100)
                         .HasColumnType("TEXT");
 
                     b.Property<string>("Actor")
                         .IsRequired()
+                        .HasMaxLength(200)
                         .HasColumnType("TEXT");
 
-                    b.Property<DateTimeOffset>("At")
+                    b.Property<DateTime>("At")
                         .HasColumnType("TEXT");
 
                     b.Property<string>("ContentHash")
                         .IsRequired()
+                        .HasMaxLength(64)
                         .HasColumnType("TEXT");
+
+                    b.Property<string>("EntryHash")
+                        .IsRequired()
+                        .HasMaxLength(64)
+                        .HasColumnType("TEXT");
+
+                    b.Property<string>("PreviousHash")
+                        .IsRequired()
+                        .HasMaxLength(64)
+                        .HasColumnType("TEXT");
+
+                    b.Property<long>("Sequence")
+                        .HasColumnType("INTEGER");
 
                     b.Property<string>("Subject")
                         .IsRequired()
+                        .HasMaxLength(300)
                         .HasColumnType("TEXT");
 
                     b.HasKey("Id");
 
+                    b.HasIndex("Actor");
+
                     b.HasIndex("At");
+
+                    b.HasIndex("Sequence")
+                        .IsUnique();
+
+                    b.HasIndex("Subject");
 
                     b.ToTable("AuditEntries");
                 });

@@ -37,11 +37,14 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                 {
                     Id = table.Column<long>(type: "bigint", nullable: false)
                         .Annotation("Npgsql:ValueGenerationStrategy", NpgsqlValueGenerationStrategy.IdentityByDefaultColumn),
-                    At = table.Column<DateTimeOffset>(type: "timestamp with time zone", nullable: false),
-                    Actor = table.Column<string>(type: "text", nullable: false),
-                    Action = table.Column<string>(type: "text", nullable: false),
-                    Subject = table.Column<string>(type: "text", nullable: false),
-                    ContentHash = table.Column<string>(type: "text", nullable: false)
+                    Sequence = table.Column<long>(type: "bigint", nullable: false),
+                    At = table.Column<DateTime>(type: "timestamp with time zone", nullable: false),
+                    Actor = table.Column<string>(type: "character varying(200)", maxLength: 200, nullable: false),
+                    Action = table.Column<string>(type: "character varying(100)", maxLength: 100, nullable: false),
+                    Subject = table.Column<string>(type: "character varying(300)", maxLength: 300, nullable: false),
+                    ContentHash = table.Column<string>(type: "character varying(64)", maxLength: 64, nullable: false),
+                    PreviousHash = table.Column<string>(type: "character varying(64)", maxLength: 64, nullable: false),
+                    EntryHash = table.Column<string>(type: "character varying(64)", maxLength: 64, nullable: false)
                 },
                 constraints: table =>
                 {
@@ -342,9 +345,25 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                 unique: true);
 
             migrationBuilder.CreateIndex(
+                name: "IX_AuditEntries_Actor",
+                table: "AuditEntries",
+                column: "Actor");
+
+            migrationBuilder.CreateIndex(
                 name: "IX_AuditEntries_At",
                 table: "AuditEntries",
                 column: "At");
+
+            migrationBuilder.CreateIndex(
+                name: "IX_AuditEntries_Sequence",
+                table: "AuditEntries",
+                column: "Sequence",
+                unique: true);
+
+            migrationBuilder.CreateIndex(
+                name: "IX_AuditEntries_Subject",
+                table: "AuditEntries",
+                column: "Subject");
 
             migrationBuilder.CreateIndex(
                 name: "IX_DecisionScores_DecisionId",
