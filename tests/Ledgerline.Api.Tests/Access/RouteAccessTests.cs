@@ -16,6 +16,8 @@ public sealed partial class RouteAccessTests
 {
     private const string Anonymous = "anonymous";
 
+    private static readonly string[] RefusalCodes = ["401", "403", "429"];
+
     private static readonly string[] AllRoles = ["scoring", "outcomes", "analyst", "risk", "admin"];
 
     /// <summary>The single expected-access table: "METHOD /path as in openapi" → the roles admitted.</summary>
@@ -38,6 +40,12 @@ public sealed partial class RouteAccessTests
         ["POST /scorecards/{key}/versions/{version}/score"] = ["analyst"],
         ["PUT /scorecards/{key}/versions/{version}/baseline"] = ["analyst"],
         ["GET /scorecards/{key}/versions/{version}/baseline"] = ["analyst", "risk"],
+        ["PUT /scorecards/{key}/traffic"] = ["risk"],
+        ["GET /scorecards/{key}/traffic"] = ["risk", "analyst"],
+        ["GET /scorecards/{key}/traffic/history"] = ["risk", "analyst"],
+        ["POST /scorecards/{key}/decisions"] = ["scoring"],
+        ["POST /scorecards/{key}/decisions/batch"] = ["scoring"],
+        ["GET /scorecards/{key}/decisions/{applicationId}"] = ["scoring", "risk", "analyst"],
     };
 
     [Fact]
@@ -122,6 +130,27 @@ public sealed partial class RouteAccessTests
         }
 
         Assert.True(undocumented.Count == 0, "Mapped but not in the OpenAPI document:\n" + string.Join("\n", undocumented));
+    }
+
+    [Fact]
+    public async Task EveryKeyedRoute_DocumentsItsRefusals()
+    {
+        await using var app = new LedgerlineApp();
+        using var client = app.CreateClient();
+        var document = JsonDocument.Parse(await client.GetStringAsync("/openapi/v1.json")).RootElement;
+
+        var missing = new List<string>();
+        foreach (var path in document.GetProperty("paths").EnumerateObject().Where(p => p.Name != "/health"))
+        {
+            foreach (var method in path.Value.EnumerateObject())
+            {
+                var responses = method.Value.GetProperty("responses");
+                missing.AddRange(RefusalCodes.Where(code => !responses.TryGetProperty(code, out _))
+                    .Select(code => $"{method.Name.ToUpperInvariant()} {path.Name} does not document {code}"));
+            }
+        }
+
+        Assert.True(missing.Count == 0, string.Join("\n", missing));
     }
 
     private static async Task<HashSet<string>> DocumentedOperationsAsync(LedgerlineApp app)

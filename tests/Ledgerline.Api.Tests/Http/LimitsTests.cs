@@ -10,10 +10,8 @@ public sealed class LimitsTests
     [Fact]
     public async Task CreateScorecard_BodyOverTheDefaultLimit_Answers413AndStoresNothing()
     {
-        // Real Kestrel: the in-memory test server does not enforce body size limits.
+        // LedgerlineApp runs real Kestrel: the in-memory test server does not enforce body size limits.
         await using var app = new LedgerlineApp();
-        app.UseKestrel(0);
-        app.StartServer();
         using var analyst = await app.ClientWithRolesAsync("analyst");
         var huge = new string('x', 1024 * 1024 + 10);
 

@@ -30,10 +30,16 @@ public static class AccessRegistration
         return group;
     }
 
-    /// <summary>Admits keys holding any of the roles.</summary>
+    /// <summary>Admits keys holding any of the roles; the refusals (401, 403) and the rate limit (429) appear in OpenAPI.</summary>
     public static TBuilder AllowRoles<TBuilder>(this TBuilder builder, params string[] roles)
         where TBuilder : IEndpointConventionBuilder =>
-        builder.RequireAuthorization(p => p.RequireRole(roles));
+        builder.RequireAuthorization(p => p.RequireRole(roles)).WithMetadata(
+            Refusal(StatusCodes.Status401Unauthorized),
+            Refusal(StatusCodes.Status403Forbidden),
+            Refusal(StatusCodes.Status429TooManyRequests));
+
+    private static ProducesResponseTypeMetadata Refusal(int status) =>
+        new(status, typeof(Microsoft.AspNetCore.Mvc.ProblemDetails), ["application/problem+json"]);
 
     /// <summary>
     /// On first start with no keys, the configured bootstrap secret becomes an admin key. Never
