@@ -30,7 +30,7 @@ internal sealed class OutcomeIngestion(
         var ids = rows.Where(r => r.Error is null).Select(r => r.ApplicationId!).Distinct().ToList();
         var decisions = await db.Decisions.AsNoTracking()
             .Where(d => d.ScorecardId == scorecard.Id && ids.Contains(d.ApplicationId))
-            .Select(d => new DecisionRef(d.Id, d.ApplicationId, d.ApplicationDate))
+            .Select(d => new DecisionRef(d.Id, d.ApplicationId, d.ApplicationDate, d.Outcome != null))
             .ToDictionaryAsync(d => d.ApplicationId, StringComparer.Ordinal, ct);
         var elsewhere = await FindElsewhereAsync(ids.Where(i => !decisions.ContainsKey(i)).ToList(), ct);
 
@@ -89,9 +89,11 @@ internal sealed class OutcomeIngestion(
             await db.Database.ExecuteSqlAsync($"SELECT 1 FROM \"Decisions\" WHERE \"Id\" = ANY({locked}) FOR UPDATE", ct);
         }
 
+        // Only decisions that already have an outcome have earlier readings to load.
         var readings = new Dictionary<Guid, List<OutcomeReading>>(touched.Count);
-        var earlier = await db.Outcomes.AsNoTracking()
-            .Where(o => touched.Contains(o.DecisionId))
+        var withReadings = good.Where(g => g.Decision.HasReadings).Select(g => g.Decision.Id).Distinct().ToList();
+        var earlier = withReadings.Count == 0 ? [] : await db.Outcomes.AsNoTracking()
+            .Where(o => withReadings.Contains(o.DecisionId))
             .OrderBy(o => o.Id)
             .Select(o => new { o.DecisionId, o.ObservedAt, o.WorstDaysPastDue, o.ChargedOff, o.Status })
             .ToListAsync(ct);
@@ -154,5 +156,5 @@ internal sealed class OutcomeIngestion(
         return list;
     }
 
-    private sealed record DecisionRef(Guid Id, string ApplicationId, DateOnly ApplicationDate);
+    private sealed record DecisionRef(Guid Id, string ApplicationId, DateOnly ApplicationDate, bool HasReadings);
 }
