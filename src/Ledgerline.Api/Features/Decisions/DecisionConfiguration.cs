@@ -29,8 +29,11 @@ internal sealed class DecisionScoreConfiguration : IEntityTypeConfiguration<Deci
 {
     public void Configure(EntityTypeBuilder<DecisionScore> builder)
     {
-        builder.HasIndex(s => new { s.ScorecardId, s.Version });
-        builder.HasIndex(s => s.DecisionId);
+        // Covering indexes for the reports: a version's scores are read from the first without
+        // touching the table, and the paired (score A, score B) join finds the other version's
+        // score of the same decision in the second.
+        builder.HasIndex(s => new { s.ScorecardId, s.Version, s.DecisionId, s.Score });
+        builder.HasIndex(s => new { s.DecisionId, s.Version, s.Score });
         builder.Property(s => s.Score).HasConversion(ScoreUnits.NullableConverter);
         builder.Property(s => s.Band).HasMaxLength(16);
         builder.Property(s => s.Error).HasMaxLength(1000);

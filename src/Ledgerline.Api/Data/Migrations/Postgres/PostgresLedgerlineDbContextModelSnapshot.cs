@@ -402,9 +402,9 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
 
                     b.HasKey("Id");
 
-                    b.HasIndex("DecisionId");
+                    b.HasIndex("DecisionId", "Version", "Score");
 
-                    b.HasIndex("ScorecardId", "Version");
+                    b.HasIndex("ScorecardId", "Version", "DecisionId", "Score");
 
                     b.ToTable("DecisionScores");
                 });

@@ -365,14 +365,14 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                 column: "Subject");
 
             migrationBuilder.CreateIndex(
-                name: "IX_DecisionScores_DecisionId",
+                name: "IX_DecisionScores_DecisionId_Version_Score",
                 table: "DecisionScores",
-                column: "DecisionId");
+                columns: new[] { "DecisionId", "Version", "Score" });
 
             migrationBuilder.CreateIndex(
-                name: "IX_DecisionScores_ScorecardId_Version",
+                name: "IX_DecisionScores_ScorecardId_Version_DecisionId_Score",
                 table: "DecisionScores",
-                columns: new[] { "ScorecardId", "Version" });
+                columns: new[] { "ScorecardId", "Version", "DecisionId", "Score" });
 
             migrationBuilder.CreateIndex(
                 name: "IX_Decisions_ScorecardId_ApplicationDate",

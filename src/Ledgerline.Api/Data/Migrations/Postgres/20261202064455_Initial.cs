@@ -366,14 +366,14 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                 column: "Subject");
 
             migrationBuilder.CreateIndex(
-                name: "IX_DecisionScores_DecisionId",
+                name: "IX_DecisionScores_DecisionId_Version_Score",
                 table: "DecisionScores",
-                column: "DecisionId");
+                columns: new[] { "DecisionId", "Version", "Score" });
 
             migrationBuilder.CreateIndex(
-                name: "IX_DecisionScores_ScorecardId_Version",
+                name: "IX_DecisionScores_ScorecardId_Version_DecisionId_Score",
                 table: "DecisionScores",
-                columns: new[] { "ScorecardId", "Version" });
+                columns: new[] { "ScorecardId", "Version", "DecisionId", "Score" });
 
             migrationBuilder.CreateIndex(
                 name: "IX_Decisions_ScorecardId_ApplicationDate",
