@@ -16,7 +16,8 @@ end
 function init(args)
   path = args[1]
   token = args[2] or ""
-  prefix = "B" .. tostring(tid) .. "-" .. tostring(os.time()) .. "-"
+  -- A third argument keeps application ids apart when several wrk processes run at once.
+  prefix = (args[3] or "B") .. tostring(tid) .. "-" .. tostring(os.time()) .. "-"
   math.randomseed(tid * 7919 + os.time())
   local categories = { "owner", "mortgage", "tenant", "with-family", "other" }
   for b = 1, 256 do

@@ -31,9 +31,11 @@ def build():
     subprocess.run(["dotnet", "build", os.path.join(ROOT, "src/Ledgerline.Api"), "-c", "Release", "-nologo", "-v", "q"], check=True)
 
 
-def start(database, port, admin_key, log_path):
-    env = dict(os.environ,
-               ConnectionStrings__Ledgerline=f"Data Source={database}",
+def start(database, port, admin_key, log_path, postgres=None):
+    """Starts the service on a SQLite file, or, given a PostgreSQL connection string, on that."""
+    store = {"ConnectionStrings__Ledgerline": f"Data Source={database}"} if postgres is None else {
+        "Database__Provider": "Postgres", "ConnectionStrings__Ledgerline": postgres}
+    env = dict(os.environ, **store,
                Access__BootstrapAdminKey=admin_key,
                ASPNETCORE_ENVIRONMENT="Production",
                Logging__LogLevel__Default="Warning")

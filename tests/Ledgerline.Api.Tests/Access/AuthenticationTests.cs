@@ -101,7 +101,7 @@ public sealed class AuthenticationTests
         Assert.Matches("^ll_[A-Za-z0-9_-]{43}$", key);
         using var connection = app.OpenDatabase();
         using var command = connection.CreateCommand();
-        command.CommandText = "SELECT * FROM ApiKeys";
+        command.CommandText = "SELECT * FROM \"ApiKeys\"";
         using var reader = command.ExecuteReader();
         var hashes = new List<string>();
         while (reader.Read())

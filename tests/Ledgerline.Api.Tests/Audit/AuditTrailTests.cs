@@ -27,7 +27,7 @@ public sealed class AuditTrailTests
         await using var app = new LedgerlineApp();
         using var risk = await SeedAsync(app);
 
-        Assert.Equal(1, app.Execute("UPDATE AuditEntries SET Actor = 'someone-else' WHERE Sequence = 3"));
+        Assert.Equal(1, app.Execute("UPDATE \"AuditEntries\" SET \"Actor\" = 'someone-else' WHERE \"Sequence\" = 3"));
         var result = await risk.GetFromJsonAsync<JsonElement>("/audit/verify");
 
         Assert.False(result.GetProperty("verified").GetBoolean());
@@ -54,7 +54,7 @@ public sealed class AuditTrailTests
             PreviousHash = third.GetProperty("previousHash").GetString()!,
         };
 
-        app.Execute($"UPDATE AuditEntries SET Actor = 'someone-else', EntryHash = '{AuditChain.HashEntry(forged)}' WHERE Sequence = 3");
+        app.Execute($"UPDATE \"AuditEntries\" SET \"Actor\" = 'someone-else', \"EntryHash\" = '{AuditChain.HashEntry(forged)}' WHERE \"Sequence\" = 3");
         var result = await risk.GetFromJsonAsync<JsonElement>("/audit/verify");
 
         Assert.False(result.GetProperty("verified").GetBoolean());
@@ -68,7 +68,7 @@ public sealed class AuditTrailTests
         await using var app = new LedgerlineApp();
         using var risk = await SeedAsync(app);
 
-        app.Execute("DELETE FROM AuditEntries WHERE Sequence = 2");
+        app.Execute("DELETE FROM \"AuditEntries\" WHERE \"Sequence\" = 2");
         var result = await risk.GetFromJsonAsync<JsonElement>("/audit/verify");
 
         Assert.False(result.GetProperty("verified").GetBoolean());

@@ -162,8 +162,11 @@ public sealed class TrafficPlanTests
     {
         using var connection = app.OpenDatabase();
         using var command = connection.CreateCommand();
-        command.CommandText = "SELECT COUNT(*) FROM AuditEntries WHERE Action = $action";
-        command.Parameters.AddWithValue("$action", action);
-        return (long)command.ExecuteScalar()!;
+        command.CommandText = "SELECT COUNT(*) FROM \"AuditEntries\" WHERE \"Action\" = @action";
+        var parameter = command.CreateParameter();
+        parameter.ParameterName = "action";
+        parameter.Value = action;
+        command.Parameters.Add(parameter);
+        return Convert.ToInt64(command.ExecuteScalar()!, System.Globalization.CultureInfo.InvariantCulture);
     }
 }

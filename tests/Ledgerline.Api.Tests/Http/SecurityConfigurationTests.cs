@@ -41,7 +41,7 @@ public sealed class SecurityConfigurationTests
         using var analyst = await app.ClientWithRolesAsync("analyst");
         await Scenario.CreateFamilyAsync(analyst);
         await Scenario.RegisterAsync(analyst, Scenario.Version());
-        app.Execute("UPDATE Versions SET Content = '{ not json'");
+        app.Execute("UPDATE \"Versions\" SET \"Content\" = '{ not json'");
 
         var response = await analyst.GetAsync($"/scorecards/{Scenario.Key}/versions/1");
 
@@ -59,12 +59,17 @@ public sealed class SecurityConfigurationTests
     {
         await using var app = new LedgerlineApp(environment: "Production");
         using var admin = app.AdminClient();
-        app.Execute("CREATE TRIGGER refuse_keys BEFORE INSERT ON ApiKeys BEGIN SELECT RAISE(ABORT, 'refused by trigger'); END;");
+        app.Execute(TestDatabase.IsPostgres
+            ? """
+              CREATE FUNCTION refuse_keys() RETURNS trigger LANGUAGE plpgsql AS $$ BEGIN RAISE EXCEPTION 'refused by trigger'; END $$;
+              CREATE TRIGGER refuse_keys BEFORE INSERT ON "ApiKeys" FOR EACH ROW EXECUTE FUNCTION refuse_keys();
+              """
+            : "CREATE TRIGGER refuse_keys BEFORE INSERT ON ApiKeys BEGIN SELECT RAISE(ABORT, 'refused by trigger'); END;");
 
         var response = await admin.PostAsync("/access/keys", Scenario.Json("""{ "name": "origination-eu", "roles": ["scoring"] }"""));
 
         var body = (await response.AssertProblemAsync(HttpStatusCode.InternalServerError)).ToString();
-        foreach (var leak in new[] { "SQLite", "refused by trigger", "INSERT", "ApiKeys", "Exception" })
+        foreach (var leak in new[] { "SQLite", "Npgsql", "refused by trigger", "INSERT", "ApiKeys", "Exception" })
         {
             Assert.DoesNotContain(leak, body, StringComparison.Ordinal);
         }

@@ -1,21 +1,22 @@
+using System.Data.Common;
 using System.Net.Http.Headers;
 using System.Net.Http.Json;
 using Microsoft.AspNetCore.Hosting;
 using Microsoft.AspNetCore.Mvc.Testing;
 using Microsoft.AspNetCore.TestHost;
-using Microsoft.Data.Sqlite;
 using Microsoft.Extensions.DependencyInjection;
 
 namespace Ledgerline.Api.Tests.Infrastructure;
 
 /// <summary>
 /// The real app with its own fresh database, hosted in-process: every request goes through the
-/// whole ASP.NET Core pipeline (routing, authentication, validation, EF Core, SQLite). One per
-/// test, so tests share nothing and can run in any order.
+/// whole ASP.NET Core pipeline (routing, authentication, validation, EF Core, and SQLite or
+/// PostgreSQL as <see cref="TestDatabase.Provider"/> says). One per test, so tests share nothing
+/// and can run in any order.
 /// </summary>
 public sealed class LedgerlineApp : WebApplicationFactory<Program>
 {
-    private readonly string _databasePath = Path.Combine(Path.GetTempPath(), $"ledgerline-test-{Guid.NewGuid():N}.db");
+    private readonly TestDatabase _database = TestDatabase.Create();
     private readonly Dictionary<string, string?> _settings = [];
     private readonly string _environment;
     private readonly TimeProvider? _clock;
@@ -40,7 +41,7 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
 
     public string AdminKey { get; } = "test-admin-" + Guid.NewGuid().ToString("N");
 
-    public string ConnectionString => $"Data Source={_databasePath}";
+    public string ConnectionString => _database.ConnectionString;
 
     /// <summary>
     /// Every test client sends <c>Expect: 100-continue</c>, so the server can refuse a body by its
@@ -61,6 +62,7 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
             builder.ConfigureTestServices(services => services.AddSingleton(_clock));
         }
 
+        builder.UseSetting("Database:Provider", TestDatabase.Provider);
         builder.UseSetting("ConnectionStrings:Ledgerline", ConnectionString);
         builder.UseSetting("Access:BootstrapAdminKey", AdminKey);
         foreach (var (k, v) in _settings)
@@ -107,7 +109,7 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
         return client;
     }
 
-    /// <summary>Runs one SQL statement straight against the database file (to tamper with rows, as an attacker with file access could).</summary>
+    /// <summary>Runs one SQL statement straight against the database (to tamper with rows, as an attacker with database access could).</summary>
     public int Execute(string sql)
     {
         using var connection = OpenDatabase();
@@ -117,30 +119,21 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
     }
 
     /// <summary>Opens the test's database directly, for checks that nothing was stored.</summary>
-    public SqliteConnection OpenDatabase()
-    {
-        var connection = new SqliteConnection(ConnectionString);
-        connection.Open();
-        return connection;
-    }
+    public DbConnection OpenDatabase() => _database.Open();
 
-    /// <summary>Counts rows of a table straight from the database file.</summary>
+    /// <summary>Counts rows of a table straight from the database.</summary>
     public long CountRows(string table)
     {
         using var connection = OpenDatabase();
         using var command = connection.CreateCommand();
         command.CommandText = $"SELECT COUNT(*) FROM \"{table}\"";
-        return (long)command.ExecuteScalar()!;
+        return Convert.ToInt64(command.ExecuteScalar()!, System.Globalization.CultureInfo.InvariantCulture);
     }
 
     public override async ValueTask DisposeAsync()
     {
         await base.DisposeAsync();
-        SqliteConnection.ClearAllPools();
-        foreach (var suffix in new[] { "", "-wal", "-shm" })
-        {
-            File.Delete(_databasePath + suffix);
-        }
+        await _database.DisposeAsync();
     }
 
     private sealed record CreatedKey(Guid Id, string Key);

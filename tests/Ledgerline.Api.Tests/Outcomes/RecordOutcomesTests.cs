@@ -237,7 +237,7 @@ public sealed class RecordOutcomesTests
 
         using var db = app.OpenDatabase();
         using var command = db.CreateCommand();
-        command.CommandText = "SELECT Subject FROM AuditEntries WHERE Action = 'outcomes.recorded'";
+        command.CommandText = "SELECT \"Subject\" FROM \"AuditEntries\" WHERE \"Action\" = 'outcomes.recorded'";
         Assert.Equal($"{Scenario.Key}/outcomes", command.ExecuteScalar());
     }
 }

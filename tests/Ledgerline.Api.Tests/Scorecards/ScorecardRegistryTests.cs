@@ -146,6 +146,7 @@ public sealed class ScorecardRegistryTests
         Assert.Equal(HttpStatusCode.OK, response.StatusCode);
     }
 
+#if !POSTGRES
     [Fact]
     public async Task Database_AfterStart_RunsInWalMode()
     {
@@ -159,6 +160,7 @@ public sealed class ScorecardRegistryTests
 
         Assert.Equal("wal", command.ExecuteScalar() as string);
     }
+#endif
 
     [Fact]
     public async Task UnknownScorecardOrVersion_Answers404NamingWhatIsMissing()

@@ -103,9 +103,10 @@ internal sealed class OutcomeIngestion(
         }
 
         var applicationDates = new Dictionary<Guid, DateOnly>(touched.Count);
+        var observations = new List<OutcomeObservation>(good.Count);
         foreach (var (decision, reading) in good)
         {
-            await store.InsertAsync(new OutcomeObservation
+            observations.Add(new OutcomeObservation
             {
                 DecisionId = decision.Id,
                 ObservedAt = reading.ObservedAt,
@@ -114,11 +115,12 @@ internal sealed class OutcomeIngestion(
                 Status = reading.Status is { } status ? OutcomeReadingCheck.Word(status) : null,
                 Classified = _rule.Classify(reading).ToStored(),
                 ReceivedAt = now,
-            }, ct);
+            });
             ReadingsOf(readings, decision.Id).Add(reading);
             applicationDates[decision.Id] = decision.ApplicationDate;
         }
 
+        await store.InsertAllAsync(observations, ct);
         foreach (var (id, applicationDate) in applicationDates)
         {
             var current = OutcomeClassifier.Classify(_rule, applicationDate, readings[id])!.Value;

@@ -5,6 +5,8 @@ using Microsoft.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore.Infrastructure;
 using Microsoft.EntityFrameworkCore.Metadata;
 using Microsoft.EntityFrameworkCore.Storage;
+using Npgsql;
+using NpgsqlTypes;
 
 namespace Ledgerline.Api.Features.Outcomes;
 
@@ -12,7 +14,8 @@ namespace Ledgerline.Api.Features.Outcomes;
 /// Writes observations and decisions' current outcomes through two prepared commands inside the
 /// request's transaction: the bulk path cannot afford a tracked entity per row. Table names,
 /// column names and value conversions come from the EF model, so the SQL stays the model's on
-/// every provider.
+/// every provider. On PostgreSQL observations go in by binary COPY instead: one stream per chunk
+/// rather than one round trip per row.
 /// </summary>
 internal sealed class OutcomeStore : IAsyncDisposable
 {
@@ -20,6 +23,7 @@ internal sealed class OutcomeStore : IAsyncDisposable
     private readonly RelationalTypeMapping[] _insertTypes;
     private readonly DbCommand _update;
     private readonly RelationalTypeMapping[] _updateTypes;
+    private string? _copy;
 
     private OutcomeStore(DbCommand insert, RelationalTypeMapping[] insertTypes, DbCommand update, RelationalTypeMapping[] updateTypes)
     {
@@ -55,7 +59,46 @@ internal sealed class OutcomeStore : IAsyncDisposable
             string.Join(", ", columns.Take(3).Select((c, i) => $"{sql.DelimitIdentifier(c)} = {sql.GenerateParameterName($"p{i}")}")) +
             $" WHERE {sql.DelimitIdentifier(columns[3])} = {sql.GenerateParameterName("p3")}");
 
-        return new OutcomeStore(insert, insertTypes, update, updateTypes);
+        var store = new OutcomeStore(insert, insertTypes, update, updateTypes);
+        if (connection is NpgsqlConnection)
+        {
+            // The same columns in the same order as the prepared insert, which WriteCopyRowAsync follows.
+            var table = StoreObjectIdentifier.Table(outcome.GetTableName()!, outcome.GetSchema());
+            var columns = insertColumns.Select(c => sql.DelimitIdentifier(outcome.FindProperty(c)!.GetColumnName(table)!));
+            store._copy = $"COPY {sql.DelimitIdentifier(outcome.GetTableName()!)} ({string.Join(", ", columns)}) FROM STDIN (FORMAT BINARY)";
+        }
+
+        return store;
+    }
+
+    /// <summary>Inserts a chunk of observations, by binary COPY on PostgreSQL.</summary>
+    public async Task InsertAllAsync(IReadOnlyList<OutcomeObservation> observations, CancellationToken ct)
+    {
+        if (_copy is null || observations.Count < 2)
+        {
+            foreach (var o in observations)
+            {
+                await InsertAsync(o, ct);
+            }
+
+            return;
+        }
+
+        await using var writer = await ((NpgsqlConnection)_insert.Connection!).BeginBinaryImportAsync(_copy, ct);
+        foreach (var o in observations)
+        {
+            await writer.StartRowAsync(ct);
+            await writer.WriteAsync(o.DecisionId, NpgsqlDbType.Uuid, ct);
+            await writer.WriteAsync(o.ObservedAt, NpgsqlDbType.Date, ct);
+            await WriteNullableAsync(writer, o.WorstDaysPastDue, NpgsqlDbType.Integer, ct);
+            await WriteNullableAsync(writer, o.ChargedOff, NpgsqlDbType.Boolean, ct);
+            await WriteNullableAsync(writer, o.Status, NpgsqlDbType.Varchar, ct);
+            // Enums are stored by name (LedgerlineDbContext's convention).
+            await WriteNullableAsync(writer, o.Classified?.ToString(), NpgsqlDbType.Varchar, ct);
+            await writer.WriteAsync(o.ReceivedAt.UtcDateTime, NpgsqlDbType.TimestampTz, ct);
+        }
+
+        await writer.CompleteAsync(ct);
     }
 
     public Task InsertAsync(OutcomeObservation o, CancellationToken ct) =>
@@ -69,6 +112,9 @@ internal sealed class OutcomeStore : IAsyncDisposable
         await _insert.DisposeAsync();
         await _update.DisposeAsync();
     }
+
+    private static Task WriteNullableAsync(NpgsqlBinaryImporter writer, object? value, NpgsqlDbType type, CancellationToken ct) =>
+        value is null ? writer.WriteNullAsync(ct) : writer.WriteAsync(value, type, ct);
 
     private static (DbCommand Command, RelationalTypeMapping[] Types) Prepare(
         DbConnection connection, DbTransaction transaction, IEntityType entity, string[] properties, Func<string[], string> text)

@@ -36,6 +36,7 @@ public static class OutcomesEndpoints
             .ProducesProblem(StatusCodes.Status413PayloadTooLarge)
             .ProducesProblem(StatusCodes.Status415UnsupportedMediaType)
             .WithBodyLimit(OutcomesBodyLimitBytes)
+            .WithRequestTimeout(LimitsRegistration.BulkTimeoutPolicy)
             .AllowRoles(Roles.Outcomes);
         group.MapGet("/maturity", GetMaturity).AllowRoles(Roles.Risk, Roles.Analyst);
         return routes;
