@@ -39,6 +39,43 @@ internal sealed class CompiledCharacteristic
         }
 
         MaxPoints = best;
+
+        // Losses below the best points depend only on the matched bin, so each bin's reason code
+        // is built once here; scoring then only ranks. Losses rank as doubles: points carry at
+        // most four decimals within ±1e9 (validated), so distinct losses stay distinct and ordered.
+        _reasonByBin = _binPoints.Select(ReasonFor).ToArray();
+        _lossByBin = _reasonByBin.Select(r => r is null ? 0 : (double)r.PointsBelowMax).ToArray();
+        _reasonMissing = definition.MissingPoints is { } m ? ReasonFor(m) : null;
+        _reasonOther = definition.OtherPoints is { } o ? ReasonFor(o) : null;
+    }
+
+    private readonly ReasonCode?[] _reasonByBin;
+    private readonly double[] _lossByBin;
+    private readonly ReasonCode? _reasonMissing;
+    private readonly ReasonCode? _reasonOther;
+
+    /// <summary>How many points below its best the matched bin leaves the applicant (0 at the best).</summary>
+    public double LossOf(int bin) => bin switch
+    {
+        MatchedBin.Missing => _reasonMissing is null ? 0 : (double)_reasonMissing.PointsBelowMax,
+        MatchedBin.Other => _reasonOther is null ? 0 : (double)_reasonOther.PointsBelowMax,
+        _ => _lossByBin[bin],
+    };
+
+    /// <summary>The reason code for the matched bin, or null when it lost nothing.</summary>
+    public ReasonCode? ReasonAt(int bin) => bin switch
+    {
+        MatchedBin.Missing => _reasonMissing,
+        MatchedBin.Other => _reasonOther,
+        _ => _reasonByBin[bin],
+    };
+
+    private ReasonCode? ReasonFor(decimal points)
+    {
+        var loss = MaxPoints - points;
+        return loss > 0
+            ? new ReasonCode(Definition.ReasonCode, Definition.Name, Definition.ReasonText, CanonicalNumber.Normalize(loss))
+            : null;
     }
 
     public CharacteristicDefinition Definition { get; }

@@ -14,7 +14,6 @@ public sealed class CompiledScorecard
     private readonly FrozenDictionary<string, int> _indexByName;
     private readonly decimal[] _bandMinimums;
     private readonly Decision[] _bandDecisions;
-    private readonly decimal[] _maxPoints;
 
     private CompiledScorecard(ScorecardDefinition definition)
     {
@@ -27,7 +26,6 @@ public sealed class CompiledScorecard
         var bands = definition.DecisionBands;
         _bandMinimums = bands.Take(bands.Count - 1).Select(b => b.MinScore!.Value).ToArray();
         _bandDecisions = bands.Select(b => b.Decision).ToArray();
-        _maxPoints = _characteristics.Select(c => c.MaxPoints).ToArray();
     }
 
     /// <summary>The definition this was compiled from.</summary>
@@ -90,7 +88,7 @@ public sealed class CompiledScorecard
         }
 
         failure = null;
-        return new ScoreResult(total, Scaling.ProbabilityOfBad(total), DecisionFor(total), bins, points, RankReasons(points));
+        return new ScoreResult(total, Scaling.ProbabilityOfBad(total), DecisionFor(total), bins, points, RankReasons(bins));
     }
 
     /// <summary>The decision band a score falls in (bands read top down).</summary>
@@ -112,7 +110,7 @@ public sealed class CompiledScorecard
     /// points minus the applicant's points, largest first, ties by characteristic order; never a
     /// characteristic that lost nothing; at most the version's reason-code count.
     /// </summary>
-    private ReasonCode[] RankReasons(decimal[] points)
+    private ReasonCode[] RankReasons(int[] bins)
     {
         var limit = Math.Min(Definition.ReasonCodeCount, _characteristics.Length);
         if (limit == 0)
@@ -121,11 +119,11 @@ public sealed class CompiledScorecard
         }
 
         Span<int> chosen = stackalloc int[limit];
-        Span<decimal> losses = stackalloc decimal[limit];
+        Span<double> losses = stackalloc double[limit];
         var count = 0;
         for (var i = 0; i < _characteristics.Length; i++)
         {
-            var loss = _maxPoints[i] - points[i];
+            var loss = _characteristics[i].LossOf(bins[i]);
             if (loss <= 0 || (count == limit && loss <= losses[count - 1]))
             {
                 continue;
@@ -149,8 +147,7 @@ public sealed class CompiledScorecard
         var reasons = new ReasonCode[count];
         for (var r = 0; r < count; r++)
         {
-            var c = _characteristics[chosen[r]].Definition;
-            reasons[r] = new ReasonCode(c.ReasonCode, c.Name, c.ReasonText, losses[r]);
+            reasons[r] = _characteristics[chosen[r]].ReasonAt(bins[chosen[r]])!;
         }
 
         return reasons;
