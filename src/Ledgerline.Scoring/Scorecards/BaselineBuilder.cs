@@ -1,4 +1,5 @@
 using Ledgerline.Scoring.Engine;
+using Ledgerline.Scoring.Statistics;
 
 namespace Ledgerline.Scoring.Scorecards;
 
@@ -69,7 +70,7 @@ public sealed class BaselineBuilder
 
         var withOutcomes = _rowsWithOutcome == _rows;
         var histogram = _histogram.Select(h => new DevelopmentScoreCount(h.Key, h.Value.Count, withOutcomes ? h.Value.Bads : null)).ToList();
-        var cuts = edges ?? DecileEdges(histogram, _rows);
+        var cuts = edges ?? DecileEdges(histogram);
         var bins = new List<ScoreBinCount>(cuts.Count + 1);
         var position = 0;
         for (var b = 0; b <= cuts.Count; b++)
@@ -98,17 +99,17 @@ public sealed class BaselineBuilder
             withOutcomes ? discrimination(histogram) : null);
     }
 
-    /// <summary>Deciles by linear interpolation between order statistics (Hyndman &amp; Fan 1996, type 7; R's default).</summary>
-    private static List<decimal> DecileEdges(List<DevelopmentScoreCount> histogram, long n)
+    /// <summary>
+    /// Deciles by linear interpolation between order statistics (Hyndman &amp; Fan 1996, type 7;
+    /// R's default), rounded to the points' precision, with repeated edges dropped.
+    /// </summary>
+    private static List<decimal> DecileEdges(List<DevelopmentScoreCount> histogram)
     {
-        var edges = new List<decimal>(9);
-        for (var k = 1; k <= 9; k++)
+        var cuts = ScoreBinning.QuantileCutPoints(histogram.Select(h => new ScoreFrequency((double)h.Score, h.Count)));
+        var edges = new List<decimal>(cuts.Count);
+        foreach (var cut in cuts)
         {
-            var h = (n - 1) * (k / 10m);
-            var lowIndex = (long)Math.Floor(h);
-            var low = ValueAt(histogram, lowIndex);
-            var high = ValueAt(histogram, Math.Min(lowIndex + 1, n - 1));
-            var edge = CanonicalNumber.Normalize(decimal.Round(low + ((h - lowIndex) * (high - low)), ScorecardValidator.MaxPointsDecimals));
+            var edge = CanonicalNumber.Normalize(decimal.Round((decimal)cut, ScorecardValidator.MaxPointsDecimals));
             if (edges.Count == 0 || edge > edges[^1])
             {
                 edges.Add(edge);
@@ -116,20 +117,5 @@ public sealed class BaselineBuilder
         }
 
         return edges;
-    }
-
-    private static decimal ValueAt(List<DevelopmentScoreCount> histogram, long index)
-    {
-        long seen = 0;
-        foreach (var cell in histogram)
-        {
-            seen += cell.Count;
-            if (index < seen)
-            {
-                return cell.Score;
-            }
-        }
-
-        return histogram[^1].Score;
     }
 }
