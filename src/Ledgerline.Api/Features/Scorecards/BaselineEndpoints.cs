@@ -32,17 +32,13 @@ public static class BaselineEndpoints
     public static async Task<Results<Ok<BaselineResponse>, ValidationProblem, ProblemHttpResult>> PutBaseline(
         string key, int version, BaselineRequest request, ClaimsPrincipal user, LedgerlineDbContext db, VersionCache cache, TimeProvider clock, CancellationToken ct)
     {
-        var scorecard = await ScorecardLookup.FindAsync(db, key, ct);
-        if (scorecard is null)
+        var lookup = await ScorecardLookup.FindVersionAsync(db, key, version, ct);
+        if (!lookup.Found)
         {
-            return ScorecardLookup.NotFound(key);
+            return lookup.Problem;
         }
 
-        var found = await ScorecardLookup.FindVersionAsync(db, scorecard.Id, version, ct);
-        if (found is null)
-        {
-            return ScorecardLookup.VersionNotFound(key, version);
-        }
+        var (scorecard, found) = (lookup.Scorecard, lookup.Version);
 
         if (found.Status != VersionStatus.Draft)
         {
@@ -93,17 +89,13 @@ public static class BaselineEndpoints
 
     public static async Task<Results<Ok<BaselineResponse>, ProblemHttpResult>> GetBaseline(string key, int version, LedgerlineDbContext db, CancellationToken ct)
     {
-        var scorecard = await ScorecardLookup.FindAsync(db, key, ct);
-        if (scorecard is null)
+        var lookup = await ScorecardLookup.FindVersionAsync(db, key, version, ct);
+        if (!lookup.Found)
         {
-            return ScorecardLookup.NotFound(key);
+            return lookup.Problem;
         }
 
-        var found = await ScorecardLookup.FindVersionAsync(db, scorecard.Id, version, ct);
-        if (found is null)
-        {
-            return ScorecardLookup.VersionNotFound(key, version);
-        }
+        var (scorecard, found) = (lookup.Scorecard, lookup.Version);
 
         return found.Baseline is { } baseline
             ? TypedResults.Ok(new BaselineResponse(version, baseline.AttachedAt, baseline.AttachedBy, Parse(baseline.Aggregates)))

@@ -14,6 +14,21 @@ public static class ScorecardLookup
     public static Task<ScorecardVersion?> FindVersionAsync(LedgerlineDbContext db, long scorecardId, int version, CancellationToken ct) =>
         db.Versions.Include(v => v.Baseline).FirstOrDefaultAsync(v => v.ScorecardId == scorecardId && v.Number == version, ct);
 
+    /// <summary>
+    /// The scorecard and one of its versions by route values, or the 404 naming which is missing.
+    /// </summary>
+    public static async Task<VersionLookup> FindVersionAsync(LedgerlineDbContext db, string key, int version, CancellationToken ct)
+    {
+        var scorecard = await FindAsync(db, key, ct);
+        if (scorecard is null)
+        {
+            return new VersionLookup(null, null, NotFound(key));
+        }
+
+        var found = await FindVersionAsync(db, scorecard.Id, version, ct);
+        return found is null ? new VersionLookup(null, null, VersionNotFound(key, version)) : new VersionLookup(scorecard, found, null);
+    }
+
     public static ProblemHttpResult NotFound(string key) =>
         Problems.NotFound($"There is no scorecard '{key}'. GET /scorecards lists the ones that exist.");
 
@@ -26,4 +41,12 @@ public static class ScorecardLookup
         VersionStatus.Approved => "approved",
         _ => "retired",
     };
+}
+
+/// <summary>A scorecard and version found by route values; <see cref="Problem"/> says which was missing.</summary>
+public sealed record VersionLookup(Scorecard? Scorecard, ScorecardVersion? Version, ProblemHttpResult? Problem)
+{
+    [System.Diagnostics.CodeAnalysis.MemberNotNullWhen(true, nameof(Scorecard), nameof(Version))]
+    [System.Diagnostics.CodeAnalysis.MemberNotNullWhen(false, nameof(Problem))]
+    public bool Found => Problem is null;
 }

@@ -104,17 +104,13 @@ public static class VersionEndpoints
     public static async Task<Results<Ok<VersionResponse>, ProblemHttpResult>> ApproveVersion(
         string key, int version, ClaimsPrincipal user, LedgerlineDbContext db, TimeProvider clock, CancellationToken ct)
     {
-        var scorecard = await ScorecardLookup.FindAsync(db, key, ct);
-        if (scorecard is null)
+        var lookup = await ScorecardLookup.FindVersionAsync(db, key, version, ct);
+        if (!lookup.Found)
         {
-            return ScorecardLookup.NotFound(key);
+            return lookup.Problem;
         }
 
-        var found = await ScorecardLookup.FindVersionAsync(db, scorecard.Id, version, ct);
-        if (found is null)
-        {
-            return ScorecardLookup.VersionNotFound(key, version);
-        }
+        var (scorecard, found) = (lookup.Scorecard, lookup.Version);
 
         if (found.Status != VersionStatus.Draft)
         {
@@ -146,17 +142,13 @@ public static class VersionEndpoints
     public static async Task<Results<Ok<VersionResponse>, ProblemHttpResult>> RetireVersion(
         string key, int version, ClaimsPrincipal user, LedgerlineDbContext db, TimeProvider clock, CancellationToken ct)
     {
-        var scorecard = await ScorecardLookup.FindAsync(db, key, ct);
-        if (scorecard is null)
+        var lookup = await ScorecardLookup.FindVersionAsync(db, key, version, ct);
+        if (!lookup.Found)
         {
-            return ScorecardLookup.NotFound(key);
+            return lookup.Problem;
         }
 
-        var found = await ScorecardLookup.FindVersionAsync(db, scorecard.Id, version, ct);
-        if (found is null)
-        {
-            return ScorecardLookup.VersionNotFound(key, version);
-        }
+        var (scorecard, found) = (lookup.Scorecard, lookup.Version);
 
         if (found.Status == VersionStatus.Retired)
         {
@@ -181,17 +173,13 @@ public static class VersionEndpoints
     public static async Task<Results<Ok<ScoreResponse>, ValidationProblem, ProblemHttpResult>> TryVersion(
         string key, int version, ScoreRequest request, LedgerlineDbContext db, VersionCache cache, CancellationToken ct)
     {
-        var scorecard = await ScorecardLookup.FindAsync(db, key, ct);
-        if (scorecard is null)
+        var lookup = await ScorecardLookup.FindVersionAsync(db, key, version, ct);
+        if (!lookup.Found)
         {
-            return ScorecardLookup.NotFound(key);
+            return lookup.Problem;
         }
 
-        var found = await ScorecardLookup.FindVersionAsync(db, scorecard.Id, version, ct);
-        if (found is null)
-        {
-            return ScorecardLookup.VersionNotFound(key, version);
-        }
+        var (scorecard, found) = (lookup.Scorecard, lookup.Version);
 
         var compiled = cache.GetOrCompile(scorecard.Id, version, found.Content);
         var input = request.Characteristics!;
