@@ -33,19 +33,13 @@ public static class ReportsEndpoints
             return problem;
         }
 
-        var scorecard = await ScorecardLookup.FindAsync(db, key, ct);
-        if (scorecard is null)
+        var (scorecard, versions, missing) = await ResolveAsync(key, query!, db, reports, ct);
+        if (missing is not null)
         {
-            return ScorecardLookup.NotFound(key);
+            return missing;
         }
 
-        var versions = await reports.VersionsAsync(scorecard, ct);
-        if (query!.Version is { } n && !versions.ContainsKey(n))
-        {
-            return ScorecardLookup.VersionNotFound(key, n);
-        }
-
-        var report = await reports.PerformanceAsync(scorecard, versions, query, ct);
+        var report = await reports.PerformanceAsync(scorecard!, versions!, query!, ct);
         return WantsCsv(request) ? TypedResults.Text(ReportCsv.Performance(report), ReportCsv.MediaType) : TypedResults.Ok(report);
     }
 
@@ -58,19 +52,13 @@ public static class ReportsEndpoints
             return problem;
         }
 
-        var scorecard = await ScorecardLookup.FindAsync(db, key, ct);
-        if (scorecard is null)
+        var (scorecard, versions, missing) = await ResolveAsync(key, query!, db, reports, ct);
+        if (missing is not null)
         {
-            return ScorecardLookup.NotFound(key);
+            return missing;
         }
 
-        var versions = await reports.VersionsAsync(scorecard, ct);
-        if (query!.Version is { } n && !versions.ContainsKey(n))
-        {
-            return ScorecardLookup.VersionNotFound(key, n);
-        }
-
-        var report = await reports.ComparisonAsync(scorecard, versions, query, ct);
+        var report = await reports.ComparisonAsync(scorecard!, versions!, query!, ct);
         return WantsCsv(request) ? TypedResults.Text(ReportCsv.Comparison(report), ReportCsv.MediaType) : TypedResults.Ok(report);
     }
 
@@ -88,20 +76,30 @@ public static class ReportsEndpoints
             return Http.Problems.Invalid("version", "give the version whose stability to report, e.g. ?version=2");
         }
 
+        var (scorecard, versions, missing) = await ResolveAsync(key, query, db, reports, ct);
+        if (missing is not null)
+        {
+            return missing;
+        }
+
+        var report = await reports.StabilityAsync(scorecard!, versions![query.Version.Value], query, ct);
+        return WantsCsv(request) ? TypedResults.Text(ReportCsv.Stability(report), ReportCsv.MediaType) : TypedResults.Ok(report);
+    }
+
+    /// <summary>The scorecard and its versions, or the 404 naming the missing scorecard or queried version.</summary>
+    private static async Task<(Scorecard? Scorecard, Dictionary<int, ReportVersion>? Versions, ProblemHttpResult? Missing)> ResolveAsync(
+        string key, ReportQuery query, LedgerlineDbContext db, ReportBuilder reports, CancellationToken ct)
+    {
         var scorecard = await ScorecardLookup.FindAsync(db, key, ct);
         if (scorecard is null)
         {
-            return ScorecardLookup.NotFound(key);
+            return (null, null, ScorecardLookup.NotFound(key));
         }
 
         var versions = await reports.VersionsAsync(scorecard, ct);
-        if (!versions.TryGetValue(query.Version.Value, out var found))
-        {
-            return ScorecardLookup.VersionNotFound(key, query.Version.Value);
-        }
-
-        var report = await reports.StabilityAsync(scorecard, found, query, ct);
-        return WantsCsv(request) ? TypedResults.Text(ReportCsv.Stability(report), ReportCsv.MediaType) : TypedResults.Ok(report);
+        return query.Version is { } n && !versions.ContainsKey(n)
+            ? (null, null, ScorecardLookup.VersionNotFound(key, n))
+            : (scorecard, versions, null);
     }
 
     private static bool WantsCsv(HttpRequest request) =>
