@@ -27,14 +27,33 @@ internal sealed class DecisionConfiguration : IEntityTypeConfiguration<Decision>
 
 internal sealed class DecisionScoreConfiguration : IEntityTypeConfiguration<DecisionScore>
 {
+    public const string ReportIndexName = "IX_DecisionScores_Report";
+
     public void Configure(EntityTypeBuilder<DecisionScore> builder)
     {
-        // Covering indexes for the reports: a version's scores are read from the first without
-        // touching the table, and the paired (score A, score B) join finds the other version's
-        // score of the same decision in the second.
-        builder.HasIndex(s => new { s.ScorecardId, s.Version, s.DecisionId, s.Score });
-        builder.HasIndex(s => new { s.DecisionId, s.Version, s.Score });
+        // The reports' index: every report query groups by a prefix of these columns in this
+        // order, so the database streams the groups out of the index (SQLite has no hash
+        // aggregate; sorting a million rows costs seconds) and never touches the table.
+        builder.HasIndex(s => new
+        {
+            s.ScorecardId,
+            s.Version,
+            s.Deciding,
+            s.Role,
+            s.PlanRevision,
+            s.Score,
+            s.Band,
+            s.DecisionBand,
+            s.Matured,
+            s.Outcome,
+            s.ChampionVersion,
+            s.ChampionScore,
+            s.ApplicationDate,
+        }).HasDatabaseName(ReportIndexName);
+        builder.HasIndex(s => s.DecisionId);
         builder.Property(s => s.Score).HasConversion(ScoreUnits.NullableConverter);
+        builder.Property(s => s.ChampionScore).HasConversion(ScoreUnits.NullableConverter);
+        builder.Property(s => s.DecisionBand).HasMaxLength(16);
         builder.Property(s => s.Band).HasMaxLength(16);
         builder.Property(s => s.Error).HasMaxLength(1000);
     }

@@ -73,6 +73,13 @@ public static class DecisionMaker
             decision.Scores.Add(arm == deciding ? ScoreRow(decision, arm, result, deciding: true) : ScoreOther(decision, arm, input, path));
         }
 
+        var championScore = decision.Scores.First(s => s.Role == ArmRole.Champion).Score;
+        foreach (var score in decision.Scores)
+        {
+            score.ChampionVersion = plan.Champion.Version;
+            score.ChampionScore = championScore;
+        }
+
         problem = null;
         return new PreparedDecision(decision, ToResponse(decision, reasons));
     }
@@ -114,6 +121,9 @@ public static class DecisionMaker
     {
         DecisionId = decision.Id,
         ScorecardId = decision.ScorecardId,
+        ApplicationDate = decision.ApplicationDate,
+        PlanRevision = decision.PlanRevision,
+        DecisionBand = decision.Band,
         Version = arm.Version,
         Role = arm.Role,
         Deciding = deciding,
@@ -127,6 +137,9 @@ public static class DecisionMaker
     {
         DecisionId = decision.Id,
         ScorecardId = decision.ScorecardId,
+        ApplicationDate = decision.ApplicationDate,
+        PlanRevision = decision.PlanRevision,
+        DecisionBand = decision.Band,
         Version = arm.Version,
         Role = arm.Role,
         Deciding = false,

@@ -5,6 +5,12 @@ namespace Ledgerline.Api.Features.Decisions;
 /// are not stored: the matched bins are what stability needs, and points follow from them and
 /// the immutable version.
 /// </summary>
+/// <remarks>
+/// The row also carries what the reports group by — the application date, the plan revision, the
+/// champion's score of the same application, what the decider answered and the current outcome
+/// (kept in step with <see cref="Decision"/> by outcome ingestion) — so that every report reads one
+/// index in its grouping order: no join over a million decisions and no sort of a million rows.
+/// </remarks>
 public sealed class DecisionScore
 {
     public long Id { get; set; }
@@ -30,4 +36,23 @@ public sealed class DecisionScore
     public string? MatchedBins { get; set; }
 
     public string? Error { get; set; }
+
+    public DateOnly ApplicationDate { get; set; }
+
+    public int PlanRevision { get; set; }
+
+    /// <summary>The champion of the plan revision that decided the application.</summary>
+    public int ChampionVersion { get; set; }
+
+    /// <summary>The champion's score of the same application (null when the champion could not score it).</summary>
+    public decimal? ChampionScore { get; set; }
+
+    /// <summary>What the deciding version answered: "approve", "refer" or "decline".</summary>
+    public required string DecisionBand { get; set; }
+
+    /// <summary>The decision's current outcome, as on <see cref="Decision.Outcome"/>.</summary>
+    public OutcomeClass? Outcome { get; set; }
+
+    /// <summary>As on <see cref="Decision.Matured"/>.</summary>
+    public bool Matured { get; set; }
 }

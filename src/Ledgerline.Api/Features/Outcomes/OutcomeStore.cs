@@ -23,14 +23,18 @@ internal sealed class OutcomeStore : IAsyncDisposable
     private readonly RelationalTypeMapping[] _insertTypes;
     private readonly DbCommand _update;
     private readonly RelationalTypeMapping[] _updateTypes;
+    private readonly DbCommand _updateScores;
+    private readonly RelationalTypeMapping[] _updateScoresTypes;
     private string? _copy;
 
-    private OutcomeStore(DbCommand insert, RelationalTypeMapping[] insertTypes, DbCommand update, RelationalTypeMapping[] updateTypes)
+    private OutcomeStore(
+        (DbCommand Command, RelationalTypeMapping[] Types) insert,
+        (DbCommand Command, RelationalTypeMapping[] Types) update,
+        (DbCommand Command, RelationalTypeMapping[] Types) updateScores)
     {
-        _insert = insert;
-        _insertTypes = insertTypes;
-        _update = update;
-        _updateTypes = updateTypes;
+        (_insert, _insertTypes) = insert;
+        (_update, _updateTypes) = update;
+        (_updateScores, _updateScoresTypes) = updateScores;
     }
 
     /// <summary>Prepares the commands on the context's open connection and current transaction.</summary>
@@ -54,12 +58,14 @@ internal sealed class OutcomeStore : IAsyncDisposable
 
         var decision = db.Model.FindEntityType(typeof(Decision))!;
         string[] updateColumns = [nameof(Decision.Outcome), nameof(Decision.Matured), nameof(Decision.OutcomeObservedAt), nameof(Decision.Id)];
-        var (update, updateTypes) = Prepare(connection, transaction, decision, updateColumns, columns =>
-            $"UPDATE {sql.DelimitIdentifier(decision.GetTableName()!)} SET " +
-            string.Join(", ", columns.Take(3).Select((c, i) => $"{sql.DelimitIdentifier(c)} = {sql.GenerateParameterName($"p{i}")}")) +
-            $" WHERE {sql.DelimitIdentifier(columns[3])} = {sql.GenerateParameterName("p3")}");
+        var update = Prepare(connection, transaction, decision, updateColumns, columns => UpdateSql(sql, decision, columns));
 
-        var store = new OutcomeStore(insert, insertTypes, update, updateTypes);
+        // The scores carry the outcome too, for the reports' index (see DecisionScore).
+        var score = db.Model.FindEntityType(typeof(DecisionScore))!;
+        string[] scoreColumns = [nameof(DecisionScore.Outcome), nameof(DecisionScore.Matured), nameof(DecisionScore.DecisionId)];
+        var updateScores = Prepare(connection, transaction, score, scoreColumns, columns => UpdateSql(sql, score, columns));
+
+        var store = new OutcomeStore((insert, insertTypes), update, updateScores);
         if (connection is NpgsqlConnection)
         {
             // The same columns in the same order as the prepared insert, which WriteCopyRowAsync follows.
@@ -104,14 +110,24 @@ internal sealed class OutcomeStore : IAsyncDisposable
     public Task InsertAsync(OutcomeObservation o, CancellationToken ct) =>
         ExecuteAsync(_insert, _insertTypes, ct, o.DecisionId, o.ObservedAt, o.WorstDaysPastDue, o.ChargedOff, o.Status, o.Classified, o.ReceivedAt);
 
-    public Task UpdateDecisionAsync(Guid decisionId, OutcomeClass outcome, bool matured, DateOnly observedAt, CancellationToken ct) =>
-        ExecuteAsync(_update, _updateTypes, ct, outcome, matured, observedAt, decisionId);
+    public async Task UpdateDecisionAsync(Guid decisionId, OutcomeClass outcome, bool matured, DateOnly observedAt, CancellationToken ct)
+    {
+        await ExecuteAsync(_update, _updateTypes, ct, outcome, matured, observedAt, decisionId);
+        await ExecuteAsync(_updateScores, _updateScoresTypes, ct, outcome, matured, decisionId);
+    }
 
     public async ValueTask DisposeAsync()
     {
         await _insert.DisposeAsync();
         await _update.DisposeAsync();
+        await _updateScores.DisposeAsync();
     }
+
+    /// <summary>UPDATE table SET every column but the last WHERE the last.</summary>
+    private static string UpdateSql(ISqlGenerationHelper sql, IEntityType entity, string[] columns) =>
+        $"UPDATE {sql.DelimitIdentifier(entity.GetTableName()!)} SET " +
+        string.Join(", ", columns[..^1].Select((c, i) => $"{sql.DelimitIdentifier(c)} = {sql.GenerateParameterName($"p{i}")}")) +
+        $" WHERE {sql.DelimitIdentifier(columns[^1])} = {sql.GenerateParameterName($"p{columns.Length - 1}")}";
 
     private static Task WriteNullableAsync(NpgsqlBinaryImporter writer, object? value, NpgsqlDbType type, CancellationToken ct) =>
         value is null ? writer.WriteNullAsync(ct) : writer.WriteAsync(value, type, ct);

@@ -17,7 +17,7 @@ public static class ComparisonCalculator
         "matured good-or-bad accounts per arm for a two-sided test at 5% with 80% power: AUC difference between independent arms with Hanley-McNeil standard errors at the pooled bad rate (the paired test on shadow scores needs fewer); bad-rate difference by Fleiss' formula";
 
     public static string PairedPopulation(int champion, int challenger, string range) =>
-        $"applications scored by both version {champion} and version {challenger} that the deciding version approved, with matured good or bad outcomes; {range}";
+        $"applications decided while version {champion} was champion, scored by both it and version {challenger}, that the deciding version approved, with matured good or bad outcomes; {range}";
 
     public static string ArmPopulation(int version, string role, string range) =>
         $"applications decided by version {version} as {role}; {range}";

@@ -12,75 +12,93 @@ namespace Ledgerline.Api.Features.Reports;
 public static class ReportAggregates
 {
     /// <summary>Scores of every version, with what the deciding version did and how the application turned out.</summary>
-    public static Task<List<ScoreCell>> ScoresAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct)
+    public static async Task<List<ScoreCell>> ScoresAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct)
     {
-        var scores = db.DecisionScores.Where(s => s.ScorecardId == scorecardId && s.Score != null);
+        var scores = InRange(db, scorecardId, query).Where(s => s.Score != null);
         if (query.Version is { } version)
         {
             scores = scores.Where(s => s.Version == version);
         }
 
-        return (from s in scores
-                join d in InRange(db, scorecardId, query) on s.DecisionId equals d.Id
-                group s by new { s.Version, s.Role, s.Deciding, s.Score, s.Band, Approved = d.Band == ApproveWord, d.Matured, d.Outcome } into g
-                select new ScoreCell(g.Key.Version, g.Key.Role, g.Key.Deciding, g.Key.Score!.Value, g.Key.Band, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Count()))
+        // Grouped by a prefix of the report index, in its order (plan revision included for that
+        // reason only), then merged here.
+        var cells = await scores
+            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Matured, s.Outcome })
+            .Select(g => new { g.Key.Version, g.Key.Role, g.Key.Deciding, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Matured, g.Key.Outcome, Count = g.LongCount() })
             .ToListAsync(ct);
+        return cells
+            .GroupBy(c => (c.Version, c.Role, c.Deciding, c.Score, c.Band, Approved: c.DecisionBand == ApproveWord, c.Matured, c.Outcome))
+            .Select(g => new ScoreCell(g.Key.Version, g.Key.Role, g.Key.Deciding, g.Key.Score!.Value, g.Key.Band, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Sum(c => c.Count)))
+            .ToList();
     }
 
     /// <summary>The deciding arms: per deciding version, role and plan revision, the decision, its score and the outcome.</summary>
-    public static Task<List<ArmCell>> ArmsAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct) =>
-        (from d in InRange(db, scorecardId, query)
-         group d by new { d.Version, d.Role, d.PlanRevision, Approved = d.Band == ApproveWord, d.Matured, d.Outcome, d.Score } into g
-         select new ArmCell(g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Key.Score, g.Count()))
-        .ToListAsync(ct);
+    public static async Task<List<ArmCell>> ArmsAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct)
+    {
+        var cells = await InRange(db, scorecardId, query)
+            .Where(s => s.Deciding)
+            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Matured, s.Outcome })
+            .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, g.Key.Matured, g.Key.Outcome, Count = g.LongCount() })
+            .ToListAsync(ct);
+        return cells
+            .GroupBy(c => (c.Version, c.Role, c.PlanRevision, Approved: c.DecisionBand == ApproveWord, c.Matured, c.Outcome, c.Score))
+            .Select(g => new ArmCell(g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Key.Score!.Value, g.Sum(c => c.Count)))
+            .ToList();
+    }
 
     /// <summary>
-    /// Applications scored by both versions: counts per (score A, score B, approved by the decider,
-    /// matured, outcome), from a self-join of the scores on the decision.
+    /// Applications that version A scored while version B was the champion (and B scored too):
+    /// counts per (score A, score B, approved by the decider, matured, outcome). Each row of A
+    /// carries the champion's score of the same application, so no self-join is needed.
     /// </summary>
-    public static Task<List<PairCell>> PairsAsync(LedgerlineDbContext db, long scorecardId, int versionA, int versionB, ReportQuery query, CancellationToken ct) =>
-        (from a in db.DecisionScores
-         join b in db.DecisionScores on a.DecisionId equals b.DecisionId
-         join d in InRange(db, scorecardId, query) on a.DecisionId equals d.Id
-         where a.ScorecardId == scorecardId && a.Version == versionA && a.Score != null && b.Version == versionB && b.Score != null
-         group a by new { ScoreA = a.Score, ScoreB = b.Score, Approved = d.Band == ApproveWord, d.Matured, d.Outcome } into g
-         select new PairCell(g.Key.ScoreA!.Value, g.Key.ScoreB!.Value, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Count()))
-        .ToListAsync(ct);
+    public static async Task<List<PairCell>> PairsAsync(LedgerlineDbContext db, long scorecardId, int versionA, int championB, ReportQuery query, CancellationToken ct)
+    {
+        // The champion is picked here, not in SQL: an equality on a column in the middle of the
+        // index makes SQLite sort the rows instead of streaming the groups.
+        var cells = await InRange(db, scorecardId, query)
+            .Where(s => s.Version == versionA && s.Score != null && s.ChampionScore != null)
+            .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Matured, s.Outcome, s.ChampionVersion, s.ChampionScore })
+            .Select(g => new { g.Key.Score, g.Key.ChampionVersion, g.Key.ChampionScore, g.Key.DecisionBand, g.Key.Matured, g.Key.Outcome, Count = g.LongCount() })
+            .ToListAsync(ct);
+        return cells
+            .Where(c => c.ChampionVersion == championB)
+            .GroupBy(c => (c.Score, c.ChampionScore, Approved: c.DecisionBand == ApproveWord, c.Matured, c.Outcome))
+            .Select(g => new PairCell(g.Key.Score!.Value, g.Key.ChampionScore!.Value, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Sum(c => c.Count)))
+            .ToList();
+    }
 
     /// <summary>One version's scores per application date (for the population stability index).</summary>
     public static Task<List<DailyScoreCell>> DailyScoresAsync(LedgerlineDbContext db, long scorecardId, int version, ReportQuery query, CancellationToken ct) =>
-        (from s in db.DecisionScores
-         join d in InRange(db, scorecardId, query) on s.DecisionId equals d.Id
-         where s.ScorecardId == scorecardId && s.Version == version && s.Score != null
-         group s by new { d.ApplicationDate, s.Score } into g
-         select new DailyScoreCell(g.Key.ApplicationDate, g.Key.Score!.Value, g.Count()))
-        .ToListAsync(ct);
+        InRange(db, scorecardId, query)
+            .Where(s => s.Version == version && s.Score != null)
+            .GroupBy(s => new { s.ApplicationDate, s.Score })
+            .Select(g => new DailyScoreCell(g.Key.ApplicationDate, g.Key.Score!.Value, g.LongCount()))
+            .ToListAsync(ct);
 
     /// <summary>One version's matched bins per application date (for the characteristic stability indexes).</summary>
     public static Task<List<DailyBinsCell>> DailyBinsAsync(LedgerlineDbContext db, long scorecardId, int version, ReportQuery query, CancellationToken ct) =>
-        (from s in db.DecisionScores
-         join d in InRange(db, scorecardId, query) on s.DecisionId equals d.Id
-         where s.ScorecardId == scorecardId && s.Version == version && s.MatchedBins != null
-         group s by new { d.ApplicationDate, s.MatchedBins } into g
-         select new DailyBinsCell(g.Key.ApplicationDate, g.Key.MatchedBins!, g.Count()))
-        .ToListAsync(ct);
+        InRange(db, scorecardId, query)
+            .Where(s => s.Version == version && s.MatchedBins != null)
+            .GroupBy(s => new { s.ApplicationDate, s.MatchedBins })
+            .Select(g => new DailyBinsCell(g.Key.ApplicationDate, g.Key.MatchedBins!, g.LongCount()))
+            .ToListAsync(ct);
 
     private const string ApproveWord = "approve";
 
-    private static IQueryable<Decision> InRange(LedgerlineDbContext db, long scorecardId, ReportQuery query)
+    private static IQueryable<DecisionScore> InRange(LedgerlineDbContext db, long scorecardId, ReportQuery query)
     {
-        var decisions = db.Decisions.Where(d => d.ScorecardId == scorecardId);
+        var scores = db.DecisionScores.AsNoTracking().Where(s => s.ScorecardId == scorecardId);
         if (query.From is { } from)
         {
-            decisions = decisions.Where(d => d.ApplicationDate >= from);
+            scores = scores.Where(s => s.ApplicationDate >= from);
         }
 
         if (query.To is { } to)
         {
-            decisions = decisions.Where(d => d.ApplicationDate <= to);
+            scores = scores.Where(s => s.ApplicationDate <= to);
         }
 
-        return decisions;
+        return scores;
     }
 }
 

@@ -366,12 +366,26 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
 
                     NpgsqlPropertyBuilderExtensions.UseIdentityByDefaultColumn(b.Property<long>("Id"));
 
+                    b.Property<DateOnly>("ApplicationDate")
+                        .HasColumnType("date");
+
                     b.Property<string>("Band")
                         .HasMaxLength(16)
                         .HasColumnType("character varying(16)");
 
+                    b.Property<long?>("ChampionScore")
+                        .HasColumnType("bigint");
+
+                    b.Property<int>("ChampionVersion")
+                        .HasColumnType("integer");
+
                     b.Property<bool>("Deciding")
                         .HasColumnType("boolean");
+
+                    b.Property<string>("DecisionBand")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("character varying(16)");
 
                     b.Property<Guid>("DecisionId")
                         .HasColumnType("uuid");
@@ -382,6 +396,16 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
 
                     b.Property<string>("MatchedBins")
                         .HasColumnType("text");
+
+                    b.Property<bool>("Matured")
+                        .HasColumnType("boolean");
+
+                    b.Property<string>("Outcome")
+                        .HasMaxLength(32)
+                        .HasColumnType("character varying(32)");
+
+                    b.Property<int>("PlanRevision")
+                        .HasColumnType("integer");
 
                     b.Property<double?>("ProbabilityOfBad")
                         .HasColumnType("double precision");
@@ -402,9 +426,10 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
 
                     b.HasKey("Id");
 
-                    b.HasIndex("DecisionId", "Version", "Score");
+                    b.HasIndex("DecisionId");
 
-                    b.HasIndex("ScorecardId", "Version", "DecisionId", "Score");
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                        .HasDatabaseName("IX_DecisionScores_Report");
 
                     b.ToTable("DecisionScores");
                 });

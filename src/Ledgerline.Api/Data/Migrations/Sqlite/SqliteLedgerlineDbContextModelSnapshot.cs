@@ -353,12 +353,26 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                         .ValueGeneratedOnAdd()
                         .HasColumnType("INTEGER");
 
+                    b.Property<DateOnly>("ApplicationDate")
+                        .HasColumnType("TEXT");
+
                     b.Property<string>("Band")
                         .HasMaxLength(16)
                         .HasColumnType("TEXT");
 
+                    b.Property<long?>("ChampionScore")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<int>("ChampionVersion")
+                        .HasColumnType("INTEGER");
+
                     b.Property<bool>("Deciding")
                         .HasColumnType("INTEGER");
+
+                    b.Property<string>("DecisionBand")
+                        .IsRequired()
+                        .HasMaxLength(16)
+                        .HasColumnType("TEXT");
 
                     b.Property<Guid>("DecisionId")
                         .HasColumnType("TEXT");
@@ -369,6 +383,16 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
 
                     b.Property<string>("MatchedBins")
                         .HasColumnType("TEXT");
+
+                    b.Property<bool>("Matured")
+                        .HasColumnType("INTEGER");
+
+                    b.Property<string>("Outcome")
+                        .HasMaxLength(32)
+                        .HasColumnType("TEXT");
+
+                    b.Property<int>("PlanRevision")
+                        .HasColumnType("INTEGER");
 
                     b.Property<double?>("ProbabilityOfBad")
                         .HasColumnType("REAL");
@@ -389,9 +413,10 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
 
                     b.HasKey("Id");
 
-                    b.HasIndex("DecisionId", "Version", "Score");
+                    b.HasIndex("DecisionId");
 
-                    b.HasIndex("ScorecardId", "Version", "DecisionId", "Score");
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                        .HasDatabaseName("IX_DecisionScores_Report");
 
                     b.ToTable("DecisionScores");
                 });

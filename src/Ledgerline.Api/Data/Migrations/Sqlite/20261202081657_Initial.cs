@@ -257,7 +257,14 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                     ProbabilityOfBad = table.Column<double>(type: "REAL", nullable: true),
                     Band = table.Column<string>(type: "TEXT", maxLength: 16, nullable: true),
                     MatchedBins = table.Column<string>(type: "TEXT", nullable: true),
-                    Error = table.Column<string>(type: "TEXT", maxLength: 1000, nullable: true)
+                    Error = table.Column<string>(type: "TEXT", maxLength: 1000, nullable: true),
+                    ApplicationDate = table.Column<DateOnly>(type: "TEXT", nullable: false),
+                    PlanRevision = table.Column<int>(type: "INTEGER", nullable: false),
+                    ChampionVersion = table.Column<int>(type: "INTEGER", nullable: false),
+                    ChampionScore = table.Column<long>(type: "INTEGER", nullable: true),
+                    DecisionBand = table.Column<string>(type: "TEXT", maxLength: 16, nullable: false),
+                    Outcome = table.Column<string>(type: "TEXT", maxLength: 32, nullable: true),
+                    Matured = table.Column<bool>(type: "INTEGER", nullable: false)
                 },
                 constraints: table =>
                 {
@@ -365,14 +372,14 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                 column: "Subject");
 
             migrationBuilder.CreateIndex(
-                name: "IX_DecisionScores_DecisionId_Version_Score",
+                name: "IX_DecisionScores_DecisionId",
                 table: "DecisionScores",
-                columns: new[] { "DecisionId", "Version", "Score" });
+                column: "DecisionId");
 
             migrationBuilder.CreateIndex(
-                name: "IX_DecisionScores_ScorecardId_Version_DecisionId_Score",
+                name: "IX_DecisionScores_Report",
                 table: "DecisionScores",
-                columns: new[] { "ScorecardId", "Version", "DecisionId", "Score" });
+                columns: new[] { "ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate" });
 
             migrationBuilder.CreateIndex(
                 name: "IX_Decisions_ScorecardId_ApplicationDate",

@@ -258,7 +258,14 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                     ProbabilityOfBad = table.Column<double>(type: "double precision", nullable: true),
                     Band = table.Column<string>(type: "character varying(16)", maxLength: 16, nullable: true),
                     MatchedBins = table.Column<string>(type: "text", nullable: true),
-                    Error = table.Column<string>(type: "character varying(1000)", maxLength: 1000, nullable: true)
+                    Error = table.Column<string>(type: "character varying(1000)", maxLength: 1000, nullable: true),
+                    ApplicationDate = table.Column<DateOnly>(type: "date", nullable: false),
+                    PlanRevision = table.Column<int>(type: "integer", nullable: false),
+                    ChampionVersion = table.Column<int>(type: "integer", nullable: false),
+                    ChampionScore = table.Column<long>(type: "bigint", nullable: true),
+                    DecisionBand = table.Column<string>(type: "character varying(16)", maxLength: 16, nullable: false),
+                    Outcome = table.Column<string>(type: "character varying(32)", maxLength: 32, nullable: true),
+                    Matured = table.Column<bool>(type: "boolean", nullable: false)
                 },
                 constraints: table =>
                 {
@@ -366,14 +373,14 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                 column: "Subject");
 
             migrationBuilder.CreateIndex(
-                name: "IX_DecisionScores_DecisionId_Version_Score",
+                name: "IX_DecisionScores_DecisionId",
                 table: "DecisionScores",
-                columns: new[] { "DecisionId", "Version", "Score" });
+                column: "DecisionId");
 
             migrationBuilder.CreateIndex(
-                name: "IX_DecisionScores_ScorecardId_Version_DecisionId_Score",
+                name: "IX_DecisionScores_Report",
                 table: "DecisionScores",
-                columns: new[] { "ScorecardId", "Version", "DecisionId", "Score" });
+                columns: new[] { "ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate" });
 
             migrationBuilder.CreateIndex(
                 name: "IX_Decisions_ScorecardId_ApplicationDate",
