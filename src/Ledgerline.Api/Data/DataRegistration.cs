@@ -31,6 +31,7 @@ public static class DataRegistration
         {
             var sqlite = string.IsNullOrWhiteSpace(connectionString) ? DefaultSqliteConnectionString : connectionString;
             builder.Services.AddDbContextPool<LedgerlineDbContext, SqliteLedgerlineDbContext>(o => o.UseSqlite(sqlite).AddInterceptors(new SqlitePragmas()));
+            builder.Services.AddHostedService<SqliteCheckpointer>();
         }
 
         builder.Services.AddHealthChecks().AddCheck<DatabaseHealthCheck>("database");

@@ -121,7 +121,9 @@ internal sealed class OutcomeIngestion(
         }
 
         await store.InsertAllAsync(observations, ct);
-        foreach (var (id, applicationDate) in applicationDates)
+        // In key order: decisions and their scores lie in the tables roughly in that order, so
+        // neighbouring updates share pages.
+        foreach (var (id, applicationDate) in applicationDates.OrderBy(a => a.Key))
         {
             var current = OutcomeClassifier.Classify(_rule, applicationDate, readings[id])!.Value;
             await store.UpdateDecisionAsync(id, current.Class.ToStored(), current.Matured, current.ObservedAt, ct);
