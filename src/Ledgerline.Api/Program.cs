@@ -10,7 +10,7 @@ using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Api.Features.Traffic;
 using Ledgerline.Api.Http;
 
-var builder = WebApplication.CreateBuilder(DemoRegistration.Arguments(args));
+var builder = WebApplication.CreateBuilder(HostArguments.For(args));
 
 builder.AddLedgerlineDemo();
 builder.AddLedgerlineData();

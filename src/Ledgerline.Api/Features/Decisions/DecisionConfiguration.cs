@@ -14,7 +14,6 @@ internal sealed class DecisionConfiguration : IEntityTypeConfiguration<Decision>
         // duplicates on any instance collide in the database.
         builder.HasIndex(d => new { d.ScorecardId, d.IdempotencyKey }).IsUnique();
         builder.HasIndex(d => new { d.ScorecardId, d.ApplicationId }).IsUnique();
-        builder.HasIndex(d => new { d.ScorecardId, d.ApplicationDate });
         builder.Property(d => d.ApplicationId).HasMaxLength(100);
         builder.Property(d => d.IdempotencyKey).HasMaxLength(200);
         builder.Property(d => d.AssignmentKey).HasMaxLength(200);

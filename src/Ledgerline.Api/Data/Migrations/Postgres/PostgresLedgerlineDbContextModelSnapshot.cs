@@ -347,8 +347,6 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
 
                     b.HasKey("Id");
 
-                    b.HasIndex("ScorecardId", "ApplicationDate");
-
                     b.HasIndex("ScorecardId", "ApplicationId")
                         .IsUnique();
 

@@ -336,8 +336,6 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
 
                     b.HasKey("Id");
 
-                    b.HasIndex("ScorecardId", "ApplicationDate");
-
                     b.HasIndex("ScorecardId", "ApplicationId")
                         .IsUnique();
 

@@ -382,11 +382,6 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
                 columns: new[] { "ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate" });
 
             migrationBuilder.CreateIndex(
-                name: "IX_Decisions_ScorecardId_ApplicationDate",
-                table: "Decisions",
-                columns: new[] { "ScorecardId", "ApplicationDate" });
-
-            migrationBuilder.CreateIndex(
                 name: "IX_Decisions_ScorecardId_ApplicationId",
                 table: "Decisions",
                 columns: new[] { "ScorecardId", "ApplicationId" },
