@@ -28,11 +28,16 @@ internal sealed class DecisionScoreConfiguration : IEntityTypeConfiguration<Deci
 {
     public const string ReportIndexName = "IX_DecisionScores_Report";
 
+    public const string MaturedIndexName = "IX_DecisionScores_Matured";
+
     public void Configure(EntityTypeBuilder<DecisionScore> builder)
     {
-        // The reports' index: every report query groups by a prefix of these columns in this
+        // The reports' indexes: every report query groups by a prefix of one of them, in its
         // order, so the database streams the groups out of the index (SQLite has no hash
-        // aggregate; sorting a million rows costs seconds) and never touches the table.
+        // aggregate; sorting a million rows costs seconds) and never touches the table. The
+        // first holds every score and nothing an outcome changes, so outcome ingestion never
+        // moves its entries; the second holds matured scores only, with their outcome, so an
+        // entry is added once when a decision matures. Immature decisions never enter figures.
         builder.HasIndex(s => new
         {
             s.ScorecardId,
@@ -43,12 +48,25 @@ internal sealed class DecisionScoreConfiguration : IEntityTypeConfiguration<Deci
             s.Score,
             s.Band,
             s.DecisionBand,
-            s.Matured,
-            s.Outcome,
             s.ChampionVersion,
             s.ChampionScore,
             s.ApplicationDate,
         }).HasDatabaseName(ReportIndexName);
+        builder.HasIndex(s => new
+        {
+            s.ScorecardId,
+            s.Version,
+            s.Deciding,
+            s.Role,
+            s.PlanRevision,
+            s.Score,
+            s.Band,
+            s.DecisionBand,
+            s.Outcome,
+            s.ChampionVersion,
+            s.ChampionScore,
+            s.ApplicationDate,
+        }).HasDatabaseName(MaturedIndexName).HasFilter("\"Matured\"");
         builder.HasIndex(s => s.DecisionId);
         builder.Property(s => s.Score).HasConversion(ScoreUnits.NullableConverter);
         builder.Property(s => s.ChampionScore).HasConversion(ScoreUnits.NullableConverter);

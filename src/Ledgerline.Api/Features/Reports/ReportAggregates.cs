@@ -1,3 +1,4 @@
+using System.Data;
 using Ledgerline.Api.Data;
 using Ledgerline.Api.Features.Decisions;
 using Microsoft.EntityFrameworkCore;
@@ -20,29 +21,41 @@ public static class ReportAggregates
             scores = scores.Where(s => s.Version == version);
         }
 
-        // Grouped by a prefix of the report index, in its order (plan revision included for that
-        // reason only), then merged here.
-        var cells = await scores
-            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Matured, s.Outcome })
-            .Select(g => new { g.Key.Version, g.Key.Role, g.Key.Deciding, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Matured, g.Key.Outcome, Count = g.LongCount() })
+        // Grouped by prefixes of the report indexes, in their order (plan revision included for
+        // that reason only), then merged here.
+        await using var snapshot = await SnapshotAsync(db, ct);
+        var all = await scores
+            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
+            .Select(g => new { g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.Score, g.Key.Band, g.Key.DecisionBand, Count = g.LongCount() })
             .ToListAsync(ct);
-        return cells
-            .GroupBy(c => (c.Version, c.Role, c.Deciding, c.Score, c.Band, Approved: c.DecisionBand == ApproveWord, c.Matured, c.Outcome))
-            .Select(g => new ScoreCell(g.Key.Version, g.Key.Role, g.Key.Deciding, g.Key.Score!.Value, g.Key.Band, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Sum(c => c.Count)))
+        var matured = await scores.Where(s => s.Matured)
+            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
+            .Select(g => new { g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, Count = g.LongCount() })
+            .ToListAsync(ct);
+        return Split(
+                all.Select(c => ((c.Version, c.Role, c.Deciding, c.Score!.Value, c.Band, c.DecisionBand == ApproveWord), c.Count)),
+                matured.Select(c => ((c.Version, c.Role, c.Deciding, c.Score!.Value, c.Band, c.DecisionBand == ApproveWord), c.Outcome, c.Count)))
+            .Select(c => new ScoreCell(c.Key.Item1, c.Key.Item2, c.Key.Item3, c.Key.Item4, c.Key.Item5, c.Key.Item6, c.Matured, c.Outcome, c.Count))
             .ToList();
     }
 
     /// <summary>The deciding arms: per deciding version, role and plan revision, the decision, its score and the outcome.</summary>
     public static async Task<List<ArmCell>> ArmsAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct)
     {
-        var cells = await InRange(db, scorecardId, query)
-            .Where(s => s.Deciding)
-            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Matured, s.Outcome })
-            .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, g.Key.Matured, g.Key.Outcome, Count = g.LongCount() })
+        var deciding = InRange(db, scorecardId, query).Where(s => s.Deciding && s.Score != null);
+        await using var snapshot = await SnapshotAsync(db, ct);
+        var all = await deciding
+            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
+            .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, Count = g.LongCount() })
             .ToListAsync(ct);
-        return cells
-            .GroupBy(c => (c.Version, c.Role, c.PlanRevision, Approved: c.DecisionBand == ApproveWord, c.Matured, c.Outcome, c.Score))
-            .Select(g => new ArmCell(g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Key.Score!.Value, g.Sum(c => c.Count)))
+        var matured = await deciding.Where(s => s.Matured)
+            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
+            .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, g.Key.Outcome, Count = g.LongCount() })
+            .ToListAsync(ct);
+        return Split(
+                all.Select(c => ((c.Version, c.Role, c.PlanRevision, c.DecisionBand == ApproveWord, c.Score!.Value), c.Count)),
+                matured.Select(c => ((c.Version, c.Role, c.PlanRevision, c.DecisionBand == ApproveWord, c.Score!.Value), c.Outcome, c.Count)))
+            .Select(c => new ArmCell(c.Key.Item1, c.Key.Item2, c.Key.Item3, c.Key.Item4, c.Matured, c.Outcome, c.Key.Item5, c.Count))
             .ToList();
     }
 
@@ -53,17 +66,24 @@ public static class ReportAggregates
     /// </summary>
     public static async Task<List<PairCell>> PairsAsync(LedgerlineDbContext db, long scorecardId, int versionA, int championB, ReportQuery query, CancellationToken ct)
     {
-        // The champion is picked here, not in SQL: an equality on a column in the middle of the
+        // The champion is picked here, not in SQL: an equality on a column in the middle of an
         // index makes SQLite sort the rows instead of streaming the groups.
-        var cells = await InRange(db, scorecardId, query)
-            .Where(s => s.Version == versionA && s.Score != null && s.ChampionScore != null)
-            .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Matured, s.Outcome, s.ChampionVersion, s.ChampionScore })
-            .Select(g => new { g.Key.Score, g.Key.ChampionVersion, g.Key.ChampionScore, g.Key.DecisionBand, g.Key.Matured, g.Key.Outcome, Count = g.LongCount() })
+        var scores = InRange(db, scorecardId, query).Where(s => s.Version == versionA && s.Score != null && s.ChampionScore != null);
+        await using var snapshot = await SnapshotAsync(db, ct);
+        var all = await scores
+            .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.ChampionVersion, s.ChampionScore })
+            .Select(g => new { g.Key.Score, g.Key.DecisionBand, g.Key.ChampionVersion, g.Key.ChampionScore, Count = g.LongCount() })
             .ToListAsync(ct);
-        return cells
-            .Where(c => c.ChampionVersion == championB)
-            .GroupBy(c => (c.Score, c.ChampionScore, Approved: c.DecisionBand == ApproveWord, c.Matured, c.Outcome))
-            .Select(g => new PairCell(g.Key.Score!.Value, g.Key.ChampionScore!.Value, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.Sum(c => c.Count)))
+        var matured = await scores.Where(s => s.Matured)
+            .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome, s.ChampionVersion, s.ChampionScore })
+            .Select(g => new { g.Key.Score, g.Key.DecisionBand, g.Key.Outcome, g.Key.ChampionVersion, g.Key.ChampionScore, Count = g.LongCount() })
+            .ToListAsync(ct);
+        return Split(
+                all.Where(c => c.ChampionVersion == championB)
+                    .Select(c => ((c.Score!.Value, c.ChampionScore!.Value, c.DecisionBand == ApproveWord), c.Count)),
+                matured.Where(c => c.ChampionVersion == championB)
+                    .Select(c => ((c.Score!.Value, c.ChampionScore!.Value, c.DecisionBand == ApproveWord), c.Outcome, c.Count)))
+            .Select(c => new PairCell(c.Key.Item1, c.Key.Item2, c.Key.Item3, c.Matured, c.Outcome, c.Count))
             .ToList();
     }
 
@@ -84,6 +104,49 @@ public static class ReportAggregates
             .ToListAsync(ct);
 
     private const string ApproveWord = "approve";
+
+    /// <summary>
+    /// Cells of every score (from the first report index) split by outcome with the matured
+    /// cells (from the matured-only index): per key, each matured outcome, and the rest immature.
+    /// </summary>
+    private static IEnumerable<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)> Split<TKey>(
+        IEnumerable<(TKey Key, long Count)> all, IEnumerable<(TKey Key, OutcomeClass? Outcome, long Count)> matured)
+        where TKey : notnull
+    {
+        var immature = new Dictionary<TKey, long>();
+        foreach (var (key, count) in all)
+        {
+            immature[key] = immature.GetValueOrDefault(key) + count;
+        }
+
+        foreach (var cell in matured.GroupBy(m => (m.Key, m.Outcome)))
+        {
+            var count = cell.Sum(m => m.Count);
+            immature[cell.Key.Key] = immature.GetValueOrDefault(cell.Key.Key) - count;
+            yield return (cell.Key.Key, true, cell.Key.Outcome, count);
+        }
+
+        foreach (var (key, count) in immature.Where(i => i.Value > 0))
+        {
+            yield return (key, false, null, count);
+        }
+    }
+
+    /// <summary>
+    /// One snapshot for the two queries of a split, so a decision that matures between them is
+    /// not counted twice; none when the caller already holds a transaction.
+    /// </summary>
+    private static async Task<IAsyncDisposable> SnapshotAsync(LedgerlineDbContext db, CancellationToken ct) =>
+        db.Database.CurrentTransaction is null
+            ? await db.Database.BeginTransactionAsync(IsolationLevel.RepeatableRead, ct)
+            : NoSnapshot.Instance;
+
+    private sealed class NoSnapshot : IAsyncDisposable
+    {
+        public static readonly NoSnapshot Instance = new();
+
+        public ValueTask DisposeAsync() => ValueTask.CompletedTask;
+    }
 
     private static IQueryable<DecisionScore> InRange(LedgerlineDbContext db, long scorecardId, ReportQuery query)
     {

@@ -413,8 +413,12 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
 
                     b.HasIndex("DecisionId");
 
-                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "ChampionVersion", "ChampionScore", "ApplicationDate")
                         .HasDatabaseName("IX_DecisionScores_Report");
+
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                        .HasDatabaseName("IX_DecisionScores_Matured")
+                        .HasFilter("\"Matured\"");
 
                     b.ToTable("DecisionScores");
                 });

@@ -11,7 +11,7 @@ using Microsoft.EntityFrameworkCore.Storage.ValueConversion;
 namespace Ledgerline.Api.Data.Migrations.Sqlite
 {
     [DbContext(typeof(SqliteLedgerlineDbContext))]
-    [Migration("20261202084935_Initial")]
+    [Migration("20261202085744_Initial")]
     partial class Initial
     {
         /// <inheritdoc />
@@ -416,8 +416,12 @@ namespace Ledgerline.Api.Data.Migrations.Sqlite
 
                     b.HasIndex("DecisionId");
 
-                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "ChampionVersion", "ChampionScore", "ApplicationDate")
                         .HasDatabaseName("IX_DecisionScores_Report");
+
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                        .HasDatabaseName("IX_DecisionScores_Matured")
+                        .HasFilter("\"Matured\"");
 
                     b.ToTable("DecisionScores");
                 });

@@ -378,9 +378,15 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                 column: "DecisionId");
 
             migrationBuilder.CreateIndex(
+                name: "IX_DecisionScores_Matured",
+                table: "DecisionScores",
+                columns: new[] { "ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate" },
+                filter: "\"Matured\"");
+
+            migrationBuilder.CreateIndex(
                 name: "IX_DecisionScores_Report",
                 table: "DecisionScores",
-                columns: new[] { "ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate" });
+                columns: new[] { "ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "ChampionVersion", "ChampionScore", "ApplicationDate" });
 
             migrationBuilder.CreateIndex(
                 name: "IX_Decisions_ScorecardId_ApplicationId",

@@ -12,7 +12,7 @@ using Npgsql.EntityFrameworkCore.PostgreSQL.Metadata;
 namespace Ledgerline.Api.Data.Migrations.Postgres
 {
     [DbContext(typeof(PostgresLedgerlineDbContext))]
-    [Migration("20261202084954_Initial")]
+    [Migration("20261202085759_Initial")]
     partial class Initial
     {
         /// <inheritdoc />
@@ -429,8 +429,12 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
 
                     b.HasIndex("DecisionId");
 
-                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Matured", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "ChampionVersion", "ChampionScore", "ApplicationDate")
                         .HasDatabaseName("IX_DecisionScores_Report");
+
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                        .HasDatabaseName("IX_DecisionScores_Matured")
+                        .HasFilter("\"Matured\"");
 
                     b.ToTable("DecisionScores");
                 });
