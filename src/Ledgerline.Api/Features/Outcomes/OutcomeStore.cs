@@ -145,11 +145,21 @@ internal sealed class OutcomeStore : IAsyncDisposable
 
     private static async Task ExecuteAsync(DbCommand command, RelationalTypeMapping[] types, CancellationToken ct, params object?[] values)
     {
-        // The type mapping applies the model's conversions (enum names, GUID and date text on SQLite).
-        command.Parameters.Clear();
-        for (var i = 0; i < values.Length; i++)
+        // The type mapping applies the model's conversions (enum names, GUID and date text on
+        // SQLite). The first row makes the parameters; later rows only change their values.
+        if (command.Parameters.Count == 0)
         {
-            command.Parameters.Add(types[i].CreateParameter(command, $"p{i}", values[i], nullable: true));
+            for (var i = 0; i < values.Length; i++)
+            {
+                command.Parameters.Add(types[i].CreateParameter(command, $"p{i}", values[i], nullable: true));
+            }
+        }
+        else
+        {
+            for (var i = 0; i < values.Length; i++)
+            {
+                command.Parameters[i].Value = (types[i].Converter is { } converter ? converter.ConvertToProvider(values[i]) : values[i]) ?? DBNull.Value;
+            }
         }
 
         await command.ExecuteNonQueryAsync(ct);

@@ -23,40 +23,38 @@ public static class ReportAggregates
 
         // Grouped by prefixes of the report indexes, in their order (plan revision included for
         // that reason only), then merged here.
-        await using var snapshot = await SnapshotAsync(db, ct);
-        var all = await scores
-            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
-            .Select(g => new { g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.Score, g.Key.Band, g.Key.DecisionBand, Count = g.LongCount() })
-            .ToListAsync(ct);
-        var matured = await scores.Where(s => s.Matured)
-            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
-            .Select(g => new { g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, Count = g.LongCount() })
-            .ToListAsync(ct);
-        return Split(
-                all.Select(c => ((c.Version, c.Role, c.Deciding, c.Score!.Value, c.Band, c.DecisionBand == ApproveWord), c.Count)),
-                matured.Select(c => ((c.Version, c.Role, c.Deciding, c.Score!.Value, c.Band, c.DecisionBand == ApproveWord), c.Outcome, c.Count)))
-            .Select(c => new ScoreCell(c.Key.Item1, c.Key.Item2, c.Key.Item3, c.Key.Item4, c.Key.Item5, c.Key.Item6, c.Matured, c.Outcome, c.Count))
-            .ToList();
+        var cells = await SplitAsync(
+            db,
+            scores.GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
+                .Select(g => new { g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.Score, g.Key.Band, g.Key.DecisionBand, Count = g.LongCount() }),
+            c => (c.Version, c.Role, c.Deciding, c.Score!.Value, c.Band, c.DecisionBand == ApproveWord),
+            c => c.Count,
+            scores.Where(s => s.Matured)
+                .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
+                .Select(g => new { g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, Count = g.LongCount() }),
+            c => (c.Version, c.Role, c.Deciding, c.Score!.Value, c.Band, c.DecisionBand == ApproveWord),
+            c => (c.Outcome, c.Count),
+            ct);
+        return cells.Select(c => new ScoreCell(c.Key.Version, c.Key.Role, c.Key.Deciding, c.Key.Item4, c.Key.Band, c.Key.Item6, c.Matured, c.Outcome, c.Count)).ToList();
     }
 
     /// <summary>The deciding arms: per deciding version, role and plan revision, the decision, its score and the outcome.</summary>
     public static async Task<List<ArmCell>> ArmsAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct)
     {
         var deciding = InRange(db, scorecardId, query).Where(s => s.Deciding && s.Score != null);
-        await using var snapshot = await SnapshotAsync(db, ct);
-        var all = await deciding
-            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
-            .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, Count = g.LongCount() })
-            .ToListAsync(ct);
-        var matured = await deciding.Where(s => s.Matured)
-            .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
-            .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, g.Key.Outcome, Count = g.LongCount() })
-            .ToListAsync(ct);
-        return Split(
-                all.Select(c => ((c.Version, c.Role, c.PlanRevision, c.DecisionBand == ApproveWord, c.Score!.Value), c.Count)),
-                matured.Select(c => ((c.Version, c.Role, c.PlanRevision, c.DecisionBand == ApproveWord, c.Score!.Value), c.Outcome, c.Count)))
-            .Select(c => new ArmCell(c.Key.Item1, c.Key.Item2, c.Key.Item3, c.Key.Item4, c.Matured, c.Outcome, c.Key.Item5, c.Count))
-            .ToList();
+        var cells = await SplitAsync(
+            db,
+            deciding.GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
+                .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, Count = g.LongCount() }),
+            c => (c.Version, c.Role, c.PlanRevision, c.DecisionBand == ApproveWord, c.Score!.Value),
+            c => c.Count,
+            deciding.Where(s => s.Matured)
+                .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
+                .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, g.Key.Outcome, Count = g.LongCount() }),
+            c => (c.Version, c.Role, c.PlanRevision, c.DecisionBand == ApproveWord, c.Score!.Value),
+            c => (c.Outcome, c.Count),
+            ct);
+        return cells.Select(c => new ArmCell(c.Key.Version, c.Key.Role, c.Key.PlanRevision, c.Key.Item4, c.Matured, c.Outcome, c.Key.Item5, c.Count)).ToList();
     }
 
     /// <summary>
@@ -69,22 +67,20 @@ public static class ReportAggregates
         // The champion is picked here, not in SQL: an equality on a column in the middle of an
         // index makes SQLite sort the rows instead of streaming the groups.
         var scores = InRange(db, scorecardId, query).Where(s => s.Version == versionA && s.Score != null && s.ChampionScore != null);
-        await using var snapshot = await SnapshotAsync(db, ct);
-        var all = await scores
-            .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.ChampionVersion, s.ChampionScore })
-            .Select(g => new { g.Key.Score, g.Key.DecisionBand, g.Key.ChampionVersion, g.Key.ChampionScore, Count = g.LongCount() })
-            .ToListAsync(ct);
-        var matured = await scores.Where(s => s.Matured)
-            .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome, s.ChampionVersion, s.ChampionScore })
-            .Select(g => new { g.Key.Score, g.Key.DecisionBand, g.Key.Outcome, g.Key.ChampionVersion, g.Key.ChampionScore, Count = g.LongCount() })
-            .ToListAsync(ct);
-        return Split(
-                all.Where(c => c.ChampionVersion == championB)
-                    .Select(c => ((c.Score!.Value, c.ChampionScore!.Value, c.DecisionBand == ApproveWord), c.Count)),
-                matured.Where(c => c.ChampionVersion == championB)
-                    .Select(c => ((c.Score!.Value, c.ChampionScore!.Value, c.DecisionBand == ApproveWord), c.Outcome, c.Count)))
-            .Select(c => new PairCell(c.Key.Item1, c.Key.Item2, c.Key.Item3, c.Matured, c.Outcome, c.Count))
-            .ToList();
+        var cells = await SplitAsync(
+            db,
+            scores.GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.ChampionVersion, s.ChampionScore })
+                .Select(g => new { g.Key.Score, g.Key.DecisionBand, g.Key.ChampionVersion, g.Key.ChampionScore, Count = g.LongCount() }),
+            c => (c.Score!.Value, c.ChampionScore!.Value, c.DecisionBand == ApproveWord, c.ChampionVersion),
+            c => c.Count,
+            scores.Where(s => s.Matured)
+                .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome, s.ChampionVersion, s.ChampionScore })
+                .Select(g => new { g.Key.Score, g.Key.DecisionBand, g.Key.Outcome, g.Key.ChampionVersion, g.Key.ChampionScore, Count = g.LongCount() }),
+            c => (c.Score!.Value, c.ChampionScore!.Value, c.DecisionBand == ApproveWord, c.ChampionVersion),
+            c => (c.Outcome, c.Count),
+            ct);
+        return cells.Where(c => c.Key.ChampionVersion == championB)
+            .Select(c => new PairCell(c.Key.Item1, c.Key.Item2, c.Key.Item3, c.Matured, c.Outcome, c.Count)).ToList();
     }
 
     /// <summary>One version's scores per application date (for the population stability index).</summary>
@@ -106,30 +102,42 @@ public static class ReportAggregates
     private const string ApproveWord = "approve";
 
     /// <summary>
-    /// Cells of every score (from the first report index) split by outcome with the matured
-    /// cells (from the matured-only index): per key, each matured outcome, and the rest immature.
+    /// Streams the cells of every score (grouped along the first report index) and the matured
+    /// cells with their outcome (along the matured-only index) into one list: per key, each
+    /// matured outcome, and the rest as immature. A key of null leaves the row out.
     /// </summary>
-    private static IEnumerable<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)> Split<TKey>(
-        IEnumerable<(TKey Key, long Count)> all, IEnumerable<(TKey Key, OutcomeClass? Outcome, long Count)> matured)
+    private static async Task<List<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)>> SplitAsync<TAll, TMatured, TKey>(
+        LedgerlineDbContext db,
+        IQueryable<TAll> all,
+        Func<TAll, TKey> allKey,
+        Func<TAll, long> allCount,
+        IQueryable<TMatured> matured,
+        Func<TMatured, TKey> maturedKey,
+        Func<TMatured, (OutcomeClass? Outcome, long Count)> maturedCount,
+        CancellationToken ct)
         where TKey : notnull
     {
+        await using var snapshot = await SnapshotAsync(db, ct);
         var immature = new Dictionary<TKey, long>();
-        foreach (var (key, count) in all)
+        await foreach (var row in all.AsAsyncEnumerable().WithCancellation(ct))
         {
-            immature[key] = immature.GetValueOrDefault(key) + count;
+            var key = allKey(row);
+            immature[key] = immature.GetValueOrDefault(key) + allCount(row);
         }
 
-        foreach (var cell in matured.GroupBy(m => (m.Key, m.Outcome)))
+        var outcomes = new Dictionary<(TKey Key, OutcomeClass? Outcome), long>();
+        await foreach (var row in matured.AsAsyncEnumerable().WithCancellation(ct))
         {
-            var count = cell.Sum(m => m.Count);
-            immature[cell.Key.Key] = immature.GetValueOrDefault(cell.Key.Key) - count;
-            yield return (cell.Key.Key, true, cell.Key.Outcome, count);
+            var key = maturedKey(row);
+            var (outcome, count) = maturedCount(row);
+            outcomes[(key, outcome)] = outcomes.GetValueOrDefault((key, outcome)) + count;
+            immature[key] = immature.GetValueOrDefault(key) - count;
         }
 
-        foreach (var (key, count) in immature.Where(i => i.Value > 0))
-        {
-            yield return (key, false, null, count);
-        }
+        var cells = new List<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)>(outcomes.Count + immature.Count);
+        cells.AddRange(outcomes.Select(o => (o.Key.Key, true, o.Key.Outcome, o.Value)));
+        cells.AddRange(immature.Where(i => i.Value > 0).Select(i => (i.Key, false, (OutcomeClass?)null, i.Value)));
+        return cells;
     }
 
     /// <summary>
