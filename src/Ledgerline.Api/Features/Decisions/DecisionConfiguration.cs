@@ -38,35 +38,14 @@ internal sealed class DecisionScoreConfiguration : IEntityTypeConfiguration<Deci
         // first holds every score and nothing an outcome changes, so outcome ingestion never
         // moves its entries; the second holds matured scores only, with their outcome, so an
         // entry is added once when a decision matures. Immature decisions never enter figures.
-        builder.HasIndex(s => new
-        {
-            s.ScorecardId,
-            s.Version,
-            s.Deciding,
-            s.Role,
-            s.PlanRevision,
-            s.Score,
-            s.Band,
-            s.DecisionBand,
-            s.ChampionVersion,
-            s.ChampionScore,
-            s.ApplicationDate,
-        }).HasDatabaseName(ReportIndexName);
-        builder.HasIndex(s => new
-        {
-            s.ScorecardId,
-            s.Version,
-            s.Deciding,
-            s.Role,
-            s.PlanRevision,
-            s.Score,
-            s.Band,
-            s.DecisionBand,
-            s.Outcome,
-            s.ChampionVersion,
-            s.ChampionScore,
-            s.ApplicationDate,
-        }).HasDatabaseName(MaturedIndexName).HasFilter("\"Matured\"");
+        string[] grouping =
+        [
+            nameof(DecisionScore.ScorecardId), nameof(DecisionScore.Version), nameof(DecisionScore.Deciding), nameof(DecisionScore.Role),
+            nameof(DecisionScore.PlanRevision), nameof(DecisionScore.Score), nameof(DecisionScore.Band), nameof(DecisionScore.DecisionBand),
+        ];
+        string[] pairing = [nameof(DecisionScore.ChampionVersion), nameof(DecisionScore.ChampionScore), nameof(DecisionScore.ApplicationDate)];
+        builder.HasIndex([.. grouping, .. pairing]).HasDatabaseName(ReportIndexName);
+        builder.HasIndex([.. grouping, nameof(DecisionScore.Outcome), .. pairing]).HasDatabaseName(MaturedIndexName).HasFilter("\"Matured\"");
         builder.HasIndex(s => s.DecisionId);
         builder.Property(s => s.Score).HasConversion(ScoreUnits.NullableConverter);
         builder.Property(s => s.ChampionScore).HasConversion(ScoreUnits.NullableConverter);
