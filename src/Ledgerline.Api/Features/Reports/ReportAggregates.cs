@@ -1,6 +1,7 @@
 using System.Data;
 using Ledgerline.Api.Data;
 using Ledgerline.Api.Features.Decisions;
+using Microsoft.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 
 namespace Ledgerline.Api.Features.Reports;
@@ -144,10 +145,36 @@ public static class ReportAggregates
     /// One snapshot for the two queries of a split, so a decision that matures between them is
     /// not counted twice; none when the caller already holds a transaction.
     /// </summary>
-    private static async Task<IAsyncDisposable> SnapshotAsync(LedgerlineDbContext db, CancellationToken ct) =>
-        db.Database.CurrentTransaction is null
-            ? await db.Database.BeginTransactionAsync(IsolationLevel.RepeatableRead, ct)
-            : NoSnapshot.Instance;
+    private static async Task<IAsyncDisposable> SnapshotAsync(LedgerlineDbContext db, CancellationToken ct)
+    {
+        if (db.Database.CurrentTransaction is not null)
+        {
+            return NoSnapshot.Instance;
+        }
+
+        if (!db.Database.IsSqlite())
+        {
+            return await db.Database.BeginTransactionAsync(IsolationLevel.RepeatableRead, ct);
+        }
+
+        // Deferred: SQLite's default transaction takes the write lock at once, which would hold
+        // up the decision log for as long as the report reads. A deferred one only reads, from
+        // the snapshot its first query sees.
+        await db.Database.OpenConnectionAsync(ct);
+        var transaction = ((SqliteConnection)db.Database.GetDbConnection()).BeginTransaction(deferred: true);
+        await db.Database.UseTransactionAsync(transaction, ct);
+        return new SqliteSnapshot(db, transaction);
+    }
+
+    private sealed class SqliteSnapshot(LedgerlineDbContext db, SqliteTransaction transaction) : IAsyncDisposable
+    {
+        public async ValueTask DisposeAsync()
+        {
+            await db.Database.UseTransactionAsync(null);
+            await transaction.DisposeAsync();
+            await db.Database.CloseConnectionAsync();
+        }
+    }
 
     private sealed class NoSnapshot : IAsyncDisposable
     {
