@@ -90,6 +90,36 @@ public sealed class ComparisonTests
     }
 
     [Fact]
+    public async Task Comparison_ChampionChangedWithinTheRange_PairsOnlyTheApplicationsDecidedUnderTheReportedChampion()
+    {
+        await using var app = new LedgerlineApp();
+        var lender = await MonitoredLender.CreateAsync(app);
+        var first = await lender.AddApprovedVersionAsync(MonitoredLender.Version("First champion", IgnoresUtilisation), baselineRows: 200);
+        var second = await lender.AddApprovedVersionAsync(MonitoredLender.Version("Second champion", ScoresUtilisation), baselineRows: 200);
+        await lender.SetPlanAsync(first, second, share: 0.5);
+        var underFirst = await lender.DecideAsync(300, "2025-06-10", seed: 61, prefix: "FIRST");
+        await lender.SetPlanAsync(second, first, share: 0.5);
+        var underSecond = await lender.DecideAsync(200, "2025-06-20", seed: 62, prefix: "SECOND");
+        var outcomes = await app.ClientWithRolesAsync("outcomes");
+        await MonitoredLender.PostOutcomesAsync(outcomes, MonitoredLender.Key, underFirst.Concat(underSecond).Select(d => (d.ApplicationId, d.Applicant.Bad)), "2026-07-01");
+
+        var report = await ComparisonAsync(lender);
+
+        // The latest revision's champion is reported; its pairs are the applications decided while
+        // it was champion, though both versions scored all 500.
+        Assert.Equal(second, report.GetProperty("champion").GetProperty("version").GetInt32());
+        var challenger = report.GetProperty("challengers").EnumerateArray().Single();
+        Assert.Equal(first, challenger.GetProperty("version").GetInt32());
+        Assert.Equal(200, challenger.GetProperty("pairedTest").GetProperty("n").GetInt64());
+        Assert.Equal(200, challenger.GetProperty("swapSet").EnumerateArray().Sum(s => s.GetProperty("count").GetInt64()));
+        Assert.Contains($"while version {second} was champion", challenger.GetProperty("pairedTest").GetProperty("population").GetString(), StringComparison.Ordinal);
+        // The split is still checked for each revision, over all 500 decisions.
+        var revisions = report.GetProperty("sampleRatio").EnumerateArray().ToList();
+        Assert.Equal(2, revisions.Count);
+        Assert.Equal(500, revisions.Sum(r => r.GetProperty("arms").EnumerateArray().Sum(a => a.GetProperty("decisions").GetInt64())));
+    }
+
+    [Fact]
     public async Task Comparison_AcceptCsv_AnswersChampionAndChallengerRows()
     {
         await using var app = new LedgerlineApp();
