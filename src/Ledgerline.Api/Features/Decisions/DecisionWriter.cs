@@ -272,23 +272,10 @@ public sealed class DecisionWriter : IHostedService, IDisposable
         /// <summary>Inserts one row; false when a unique index already held its key.</summary>
         public bool Execute(DbCommand command, object entity)
         {
-            if (command.Parameters.Count == 0)
+            for (var i = 0; i < _columns.Length; i++)
             {
-                // The first row makes the parameters, configured by the model's type mappings
-                // (text GUIDs and dates on SQLite); later rows only change their values.
-                foreach (var (property, getter, mapping, name) in _columns)
-                {
-                    command.Parameters.Add(mapping.CreateParameter(command, name, getter.GetClrValueUsingContainingEntity(entity), property.IsNullable));
-                }
-            }
-            else
-            {
-                for (var i = 0; i < _columns.Length; i++)
-                {
-                    var (_, getter, mapping, _) = _columns[i];
-                    var value = getter.GetClrValueUsingContainingEntity(entity);
-                    command.Parameters[i].Value = (mapping.Converter is { } converter ? converter.ConvertToProvider(value) : value) ?? DBNull.Value;
-                }
+                var (property, getter, mapping, name) = _columns[i];
+                ReusedParameters.Set(command, i, mapping, name, getter.GetClrValueUsingContainingEntity(entity), property.IsNullable);
             }
 
             return command.ExecuteNonQuery() == 1;

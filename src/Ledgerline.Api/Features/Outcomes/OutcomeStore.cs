@@ -145,21 +145,10 @@ internal sealed class OutcomeStore : IAsyncDisposable
 
     private static async Task ExecuteAsync(DbCommand command, RelationalTypeMapping[] types, CancellationToken ct, params object?[] values)
     {
-        // The type mapping applies the model's conversions (enum names, GUID and date text on
-        // SQLite). The first row makes the parameters; later rows only change their values.
-        if (command.Parameters.Count == 0)
+        // The type mappings apply the model's conversions (enum names, GUID and date text on SQLite).
+        for (var i = 0; i < values.Length; i++)
         {
-            for (var i = 0; i < values.Length; i++)
-            {
-                command.Parameters.Add(types[i].CreateParameter(command, $"p{i}", values[i], nullable: true));
-            }
-        }
-        else
-        {
-            for (var i = 0; i < values.Length; i++)
-            {
-                command.Parameters[i].Value = (types[i].Converter is { } converter ? converter.ConvertToProvider(values[i]) : values[i]) ?? DBNull.Value;
-            }
+            ReusedParameters.Set(command, i, types[i], $"p{i}", values[i], nullable: true);
         }
 
         await command.ExecuteNonQueryAsync(ct);

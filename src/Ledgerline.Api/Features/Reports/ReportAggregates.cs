@@ -27,16 +27,13 @@ public static class ReportAggregates
         var cells = await SplitAsync(
             db,
             scores.GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
-                .Select(g => new { g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.Score, g.Key.Band, g.Key.DecisionBand, Count = g.LongCount() }),
-            c => (c.Version, c.Role, c.Deciding, c.Score!.Value, c.Band, c.DecisionBand == ApproveWord),
-            c => c.Count,
+                .Select(g => new IndexCell(g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, null, 0, null, g.LongCount())),
             scores.Where(s => s.Matured)
                 .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
-                .Select(g => new { g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, Count = g.LongCount() }),
-            c => (c.Version, c.Role, c.Deciding, c.Score!.Value, c.Band, c.DecisionBand == ApproveWord),
-            c => (c.Outcome, c.Count),
+                .Select(g => new IndexCell(g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, 0, null, g.LongCount())),
+            c => (c.Version, c.Role, c.Deciding, Score: c.Score!.Value, c.Band, Approved: c.DecisionBand == ApproveWord),
             ct);
-        return cells.Select(c => new ScoreCell(c.Key.Version, c.Key.Role, c.Key.Deciding, c.Key.Item4, c.Key.Band, c.Key.Item6, c.Matured, c.Outcome, c.Count)).ToList();
+        return cells.Select(c => new ScoreCell(c.Key.Version, c.Key.Role, c.Key.Deciding, c.Key.Score, c.Key.Band, c.Key.Approved, c.Matured, c.Outcome, c.Count)).ToList();
     }
 
     /// <summary>The deciding arms: per deciding version, role and plan revision, the decision, its score and the outcome.</summary>
@@ -46,16 +43,13 @@ public static class ReportAggregates
         var cells = await SplitAsync(
             db,
             deciding.GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
-                .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, Count = g.LongCount() }),
-            c => (c.Version, c.Role, c.PlanRevision, c.DecisionBand == ApproveWord, c.Score!.Value),
-            c => c.Count,
+                .Select(g => new IndexCell(g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, null, 0, null, g.LongCount())),
             deciding.Where(s => s.Matured)
                 .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
-                .Select(g => new { g.Key.Version, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.DecisionBand, g.Key.Outcome, Count = g.LongCount() }),
-            c => (c.Version, c.Role, c.PlanRevision, c.DecisionBand == ApproveWord, c.Score!.Value),
-            c => (c.Outcome, c.Count),
+                .Select(g => new IndexCell(g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, 0, null, g.LongCount())),
+            c => (c.Version, c.Role, c.PlanRevision, Approved: c.DecisionBand == ApproveWord, Score: c.Score!.Value),
             ct);
-        return cells.Select(c => new ArmCell(c.Key.Version, c.Key.Role, c.Key.PlanRevision, c.Key.Item4, c.Matured, c.Outcome, c.Key.Item5, c.Count)).ToList();
+        return cells.Select(c => new ArmCell(c.Key.Version, c.Key.Role, c.Key.PlanRevision, c.Key.Approved, c.Matured, c.Outcome, c.Key.Score, c.Count)).ToList();
     }
 
     /// <summary>
@@ -71,17 +65,14 @@ public static class ReportAggregates
         var cells = await SplitAsync(
             db,
             scores.GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.ChampionVersion, s.ChampionScore })
-                .Select(g => new { g.Key.Score, g.Key.DecisionBand, g.Key.ChampionVersion, g.Key.ChampionScore, Count = g.LongCount() }),
-            c => (c.Score!.Value, c.ChampionScore!.Value, c.DecisionBand == ApproveWord, c.ChampionVersion),
-            c => c.Count,
+                .Select(g => new IndexCell(versionA, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, null, g.Key.ChampionVersion, g.Key.ChampionScore, g.LongCount())),
             scores.Where(s => s.Matured)
                 .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome, s.ChampionVersion, s.ChampionScore })
-                .Select(g => new { g.Key.Score, g.Key.DecisionBand, g.Key.Outcome, g.Key.ChampionVersion, g.Key.ChampionScore, Count = g.LongCount() }),
-            c => (c.Score!.Value, c.ChampionScore!.Value, c.DecisionBand == ApproveWord, c.ChampionVersion),
-            c => (c.Outcome, c.Count),
+                .Select(g => new IndexCell(versionA, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, g.Key.ChampionVersion, g.Key.ChampionScore, g.LongCount())),
+            c => (Score: c.Score!.Value, ChampionScore: c.ChampionScore!.Value, Approved: c.DecisionBand == ApproveWord, c.ChampionVersion),
             ct);
         return cells.Where(c => c.Key.ChampionVersion == championB)
-            .Select(c => new PairCell(c.Key.Item1, c.Key.Item2, c.Key.Item3, c.Matured, c.Outcome, c.Count)).ToList();
+            .Select(c => new PairCell(c.Key.Score, c.Key.ChampionScore, c.Key.Approved, c.Matured, c.Outcome, c.Count)).ToList();
     }
 
     /// <summary>One version's scores per application date (for the population stability index).</summary>
@@ -104,35 +95,27 @@ public static class ReportAggregates
 
     /// <summary>
     /// Streams the cells of every score (grouped along the first report index) and the matured
-    /// cells with their outcome (along the matured-only index) into one list: per key, each
-    /// matured outcome, and the rest as immature. A key of null leaves the row out.
+    /// cells with their outcome (along the matured-only index) into one list, per report key:
+    /// each matured outcome, and the rest as immature.
     /// </summary>
-    private static async Task<List<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)>> SplitAsync<TAll, TMatured, TKey>(
-        LedgerlineDbContext db,
-        IQueryable<TAll> all,
-        Func<TAll, TKey> allKey,
-        Func<TAll, long> allCount,
-        IQueryable<TMatured> matured,
-        Func<TMatured, TKey> maturedKey,
-        Func<TMatured, (OutcomeClass? Outcome, long Count)> maturedCount,
-        CancellationToken ct)
+    private static async Task<List<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)>> SplitAsync<TKey>(
+        LedgerlineDbContext db, IQueryable<IndexCell> all, IQueryable<IndexCell> matured, Func<IndexCell, TKey> keyOf, CancellationToken ct)
         where TKey : notnull
     {
         await using var snapshot = await SnapshotAsync(db, ct);
         var immature = new Dictionary<TKey, long>();
-        await foreach (var row in all.AsAsyncEnumerable().WithCancellation(ct))
+        await foreach (var cell in all.AsAsyncEnumerable().WithCancellation(ct))
         {
-            var key = allKey(row);
-            immature[key] = immature.GetValueOrDefault(key) + allCount(row);
+            var key = keyOf(cell);
+            immature[key] = immature.GetValueOrDefault(key) + cell.Count;
         }
 
         var outcomes = new Dictionary<(TKey Key, OutcomeClass? Outcome), long>();
-        await foreach (var row in matured.AsAsyncEnumerable().WithCancellation(ct))
+        await foreach (var cell in matured.AsAsyncEnumerable().WithCancellation(ct))
         {
-            var key = maturedKey(row);
-            var (outcome, count) = maturedCount(row);
-            outcomes[(key, outcome)] = outcomes.GetValueOrDefault((key, outcome)) + count;
-            immature[key] = immature.GetValueOrDefault(key) - count;
+            var key = keyOf(cell);
+            outcomes[(key, cell.Outcome)] = outcomes.GetValueOrDefault((key, cell.Outcome)) + cell.Count;
+            immature[key] = immature.GetValueOrDefault(key) - cell.Count;
         }
 
         var cells = new List<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)>(outcomes.Count + immature.Count);
@@ -140,6 +123,11 @@ public static class ReportAggregates
         cells.AddRange(immature.Where(i => i.Value > 0).Select(i => (i.Key, false, (OutcomeClass?)null, i.Value)));
         return cells;
     }
+
+    /// <summary>One group read from a report index; columns a query does not group by hold defaults.</summary>
+    private sealed record IndexCell(
+        int Version, bool Deciding, ArmRole Role, int PlanRevision, decimal? Score, string? Band, string DecisionBand,
+        OutcomeClass? Outcome, int ChampionVersion, decimal? ChampionScore, long Count);
 
     /// <summary>
     /// One snapshot for the two queries of a split, so a decision that matures between them is
