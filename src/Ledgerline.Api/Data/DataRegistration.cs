@@ -34,6 +34,8 @@ public static class DataRegistration
             builder.Services.AddHostedService<SqliteCheckpointer>();
         }
 
+        builder.Services.AddSingleton<SqliteLogRestart>();
+
         builder.Services.AddHealthChecks().AddCheck<DatabaseHealthCheck>("database");
         return builder;
     }

@@ -7,11 +7,17 @@ namespace Ledgerline.Api.Data;
 /// thread. Left to SQLite, the commit that crosses the log's size threshold does this copy (and
 /// its fsync) itself, so one decision batch or outcome request in a thousand pages would wait
 /// for all of it; connections therefore run with <c>wal_autocheckpoint=0</c> (see
-/// <see cref="SqlitePragmas"/>) and this service takes the work off the request path.
+/// <see cref="SqlitePragmas"/>) and this service takes the work off the request path. A long log
+/// is then handed to <see cref="SqliteLogRestart"/> so that it starts over.
 /// </summary>
-internal sealed partial class SqliteCheckpointer(IServiceScopeFactory scopes, ILogger<SqliteCheckpointer> logger) : BackgroundService
+internal sealed partial class SqliteCheckpointer(IServiceScopeFactory scopes, SqliteLogRestart restart, ILogger<SqliteCheckpointer> logger) : BackgroundService
 {
     public static readonly TimeSpan Interval = TimeSpan.FromSeconds(1);
+
+    /// <summary>A pass copying this few frames (1 MB) is as close as the copy gets to the writer.</summary>
+    private const long SmallPass = 256;
+
+    private const int MaxPasses = 8;
 
     protected override async Task ExecuteAsync(CancellationToken stoppingToken)
     {
@@ -35,13 +41,40 @@ internal sealed partial class SqliteCheckpointer(IServiceScopeFactory scopes, IL
         {
             await using var scope = scopes.CreateAsyncScope();
             var db = scope.ServiceProvider.GetRequiredService<LedgerlineDbContext>();
-            // PASSIVE copies what no reader still needs and never blocks writers or readers.
-            await db.Database.ExecuteSqlRawAsync("PRAGMA wal_checkpoint(PASSIVE);", ct);
+            await db.Database.OpenConnectionAsync(ct);
+            await using var command = db.Database.GetDbConnection().CreateCommand();
+            // PASSIVE copies what no reader still needs and never blocks writers or readers. Its row
+            // says whether it was blocked, how many frames the log holds and how many are copied.
+            // Each pass copies what was committed during the one before, so a few passes leave the
+            // decision-log writer only a moment's frames to copy when it restarts the log.
+            command.CommandText = "PRAGMA wal_checkpoint(PASSIVE);";
+            long copiedBefore = 0;
+            for (var pass = 0; pass < MaxPasses; pass++)
+            {
+                var (frames, copied) = await PassAsync(command, ct);
+                var copiedNow = copied >= copiedBefore ? copied - copiedBefore : copied;
+                copiedBefore = copied;
+                if (copiedNow <= SmallPass)
+                {
+                    if (frames >= SqliteLogRestart.FramesWorthRestarting && frames == copied)
+                    {
+                        restart.Request();
+                    }
+
+                    break;
+                }
+            }
         }
         catch (Exception e) when (e is Microsoft.Data.Sqlite.SqliteException or InvalidOperationException)
         {
             LogFailed(logger, e);
         }
+    }
+
+    private static async Task<(long Frames, long Copied)> PassAsync(System.Data.Common.DbCommand command, CancellationToken ct)
+    {
+        await using var result = await command.ExecuteReaderAsync(ct);
+        return await result.ReadAsync(ct) && result.GetInt64(0) == 0 ? (result.GetInt64(1), result.GetInt64(2)) : (0, 0);
     }
 
     [LoggerMessage(Level = LogLevel.Warning, Message = "Checkpointing the SQLite write-ahead log failed; retrying in a second")]

@@ -28,12 +28,14 @@ public sealed class DecisionWriter : IHostedService, IDisposable
 
     private readonly Channel<Pending> _queue = Channel.CreateUnbounded<Pending>(new UnboundedChannelOptions { SingleReader = true });
     private readonly IServiceScopeFactory _scopes;
+    private readonly SqliteLogRestart _logRestart;
     private readonly ILogger<DecisionWriter> _logger;
     private Thread? _thread;
 
-    public DecisionWriter(IServiceScopeFactory scopes, ILogger<DecisionWriter> logger)
+    public DecisionWriter(IServiceScopeFactory scopes, SqliteLogRestart logRestart, ILogger<DecisionWriter> logger)
     {
         _scopes = scopes;
+        _logRestart = logRestart;
         _logger = logger;
     }
 
@@ -117,6 +119,12 @@ public sealed class DecisionWriter : IHostedService, IDisposable
                 // method has just made true by inserting the decision first. The setting lasts
                 // until the pooled connection is next opened (SqlitePragmas turns it back on).
                 db.Database.ExecuteSqlRaw("PRAGMA foreign_keys=OFF;");
+                if (_logRestart.TryTake())
+                {
+                    // Copies the frames committed since the background checkpoint, so this batch
+                    // begins on a fully copied log and SQLite writes it from the start.
+                    db.Database.ExecuteSqlRaw("PRAGMA wal_checkpoint(PASSIVE);");
+                }
             }
 
             using var transaction = connection.BeginTransaction();

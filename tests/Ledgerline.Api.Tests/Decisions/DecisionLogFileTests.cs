@@ -1,0 +1,64 @@
+#if !POSTGRES
+using System.Buffers.Binary;
+using System.Diagnostics;
+using Ledgerline.Api.Tests.Infrastructure;
+using Microsoft.Data.Sqlite;
+
+namespace Ledgerline.Api.Tests.Decisions;
+
+/// <summary>The SQLite write-ahead log under a decision load that never pauses.</summary>
+public sealed class DecisionLogFileTests
+{
+    [Fact]
+    public async Task Decide_UnderSustainedLoad_TheWriteAheadLogStartsOver()
+    {
+        await using var app = new LedgerlineApp();
+        var setup = await LiveScoringSetup.WithPlanAsync(app);
+        var log = new SqliteConnectionStringBuilder(app.ConnectionString).DataSource + "-wal";
+        using var stop = new CancellationTokenSource();
+        var failures = 0;
+        var clients = Enumerable.Range(0, 16).Select(client => Task.Run(async () =>
+        {
+            for (var n = 0; !stop.IsCancellationRequested; n++)
+            {
+                using var response = await setup.DecideAsync(LiveScoringSetup.Application($"LOAD-{client}-{n}"));
+                if (!response.IsSuccessStatusCode)
+                {
+                    Interlocked.Increment(ref failures);
+                }
+            }
+        })).ToList();
+
+        // Once the load runs, nothing pauses the writer long enough for a background checkpoint to
+        // catch up by itself; the restart has to be arranged.
+        await Task.Delay(TimeSpan.FromSeconds(1.5));
+        var before = RestartCount(log);
+        var watch = Stopwatch.StartNew();
+        var after = before;
+        while (after == before && watch.Elapsed < TimeSpan.FromSeconds(8))
+        {
+            await Task.Delay(TimeSpan.FromMilliseconds(100));
+            after = RestartCount(log);
+        }
+
+        await stop.CancelAsync();
+        await Task.WhenAll(clients);
+
+        Assert.Equal(0, failures);
+        Assert.True(after > before, $"the log did not start over in 8 s of load (restart count stayed {before})");
+    }
+
+    /// <summary>
+    /// The checkpoint sequence number in bytes 12–15 of the log's header (big-endian), which SQLite
+    /// increments each time the log starts over. Source: "Database File Format", section "WAL File
+    /// Format", sqlite.org/fileformat2.html.
+    /// </summary>
+    private static uint RestartCount(string log)
+    {
+        using var file = new FileStream(log, FileMode.Open, FileAccess.Read, FileShare.ReadWrite | FileShare.Delete);
+        Span<byte> header = stackalloc byte[16];
+        file.ReadExactly(header);
+        return BinaryPrimitives.ReadUInt32BigEndian(header[12..]);
+    }
+}
+#endif
