@@ -48,21 +48,23 @@ internal sealed partial class SqliteCheckpointer(IServiceScopeFactory scopes, Sq
             // Each pass copies what was committed during the one before, so a few passes leave the
             // decision-log writer only a moment's frames to copy when it restarts the log.
             command.CommandText = "PRAGMA wal_checkpoint(PASSIVE);";
-            long copiedBefore = 0;
+            long copiedBefore = 0, frames = 0;
             for (var pass = 0; pass < MaxPasses; pass++)
             {
-                var (frames, copied) = await PassAsync(command, ct);
+                (frames, var copied) = await PassAsync(command, ct);
                 var copiedNow = copied >= copiedBefore ? copied - copiedBefore : copied;
                 copiedBefore = copied;
                 if (copiedNow <= SmallPass)
                 {
-                    if (frames >= SqliteLogRestart.FramesWorthRestarting && frames == copied)
-                    {
-                        restart.Request();
-                    }
-
                     break;
                 }
+            }
+
+            // Asked even when the passes did not catch up (a machine short of CPU, a reader still on
+            // older frames): the writer then copies more at once, but the log stops growing.
+            if (frames >= SqliteLogRestart.FramesWorthRestarting)
+            {
+                restart.Request();
             }
         }
         catch (Exception e) when (e is Microsoft.Data.Sqlite.SqliteException or InvalidOperationException)

@@ -20,16 +20,20 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
     private readonly Dictionary<string, string?> _settings = [];
     private readonly string _environment;
     private readonly TimeProvider? _clock;
+    private readonly Action<IServiceCollection>? _services;
 
     /// <param name="settings">Configuration to add, e.g. <c>Limits:PermitsPerSecond</c>.</param>
     /// <param name="environment">The hosting environment; <c>Testing</c> unless a test checks environment-specific behaviour.</param>
     /// <param name="clock">Replaces the system clock, for tests that move time.</param>
-    public LedgerlineApp(IDictionary<string, string?>? settings = null, string environment = "Testing", TimeProvider? clock = null)
+    /// <param name="services">Adds to the app's services, e.g. a logger provider that records what the app did.</param>
+    public LedgerlineApp(
+        IDictionary<string, string?>? settings = null, string environment = "Testing", TimeProvider? clock = null, Action<IServiceCollection>? services = null)
     {
         // Real Kestrel on a loopback port, so server limits (body size, timeouts) apply as in production.
         UseKestrel(0);
         _environment = environment;
         _clock = clock;
+        _services = services;
         if (settings is not null)
         {
             foreach (var (k, v) in settings)
@@ -60,6 +64,11 @@ public sealed class LedgerlineApp : WebApplicationFactory<Program>
         if (_clock is not null)
         {
             builder.ConfigureTestServices(services => services.AddSingleton(_clock));
+        }
+
+        if (_services is not null)
+        {
+            builder.ConfigureTestServices(_services);
         }
 
         builder.UseSetting("Database:Provider", TestDatabase.Provider);

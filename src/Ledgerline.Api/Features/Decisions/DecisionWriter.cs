@@ -121,9 +121,7 @@ public sealed class DecisionWriter : IHostedService, IDisposable
                 db.Database.ExecuteSqlRaw("PRAGMA foreign_keys=OFF;");
                 if (_logRestart.TryTake())
                 {
-                    // Copies the frames committed since the background checkpoint, so this batch
-                    // begins on a fully copied log and SQLite writes it from the start.
-                    db.Database.ExecuteSqlRaw("PRAGMA wal_checkpoint(PASSIVE);");
+                    CopyRestOfLog(connection);
                 }
             }
 
@@ -159,6 +157,22 @@ public sealed class DecisionWriter : IHostedService, IDisposable
         finally
         {
             db.Database.CloseConnection();
+        }
+    }
+
+    /// <summary>
+    /// Copies the frames committed since the background checkpoint, so that the next batch begins on
+    /// a fully copied log and SQLite writes it from the start. While a reader still holds older
+    /// frames the copy stops short; the request then stands for the next batch.
+    /// </summary>
+    private void CopyRestOfLog(DbConnection connection)
+    {
+        using var command = connection.CreateCommand();
+        command.CommandText = "PRAGMA wal_checkpoint(PASSIVE);";
+        using var result = command.ExecuteReader();
+        if (!result.Read() || result.GetInt64(0) != 0 || result.GetInt64(1) != result.GetInt64(2))
+        {
+            _logRestart.Request();
         }
     }
 

@@ -429,7 +429,7 @@ namespace Ledgerline.Api.Data.Migrations.Postgres
                     b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "ChampionVersion", "ChampionScore", "ApplicationDate")
                         .HasDatabaseName("IX_DecisionScores_Report");
 
-                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate")
+                    b.HasIndex("ScorecardId", "Version", "Deciding", "Role", "PlanRevision", "Score", "Band", "DecisionBand", "Outcome", "ChampionVersion", "ChampionScore", "ApplicationDate", "Matured")
                         .HasDatabaseName("IX_DecisionScores_Matured")
                         .HasFilter("\"Matured\"");
 
