@@ -16,7 +16,7 @@ public static class ReportAggregates
     /// <summary>Scores of every version, with what the deciding version did and how the application turned out.</summary>
     public static async Task<List<ScoreCell>> ScoresAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct)
     {
-        var scores = InRange(db, scorecardId, query).Where(s => s.Score != null);
+        var scores = InRange(db.DecisionScores, scorecardId, query).Where(s => s.Score != null);
         if (query.Version is { } version)
         {
             scores = scores.Where(s => s.Version == version);
@@ -39,7 +39,7 @@ public static class ReportAggregates
     /// <summary>The deciding arms: per deciding version, role and plan revision, the decision, its score and the outcome.</summary>
     public static async Task<List<ArmCell>> ArmsAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct)
     {
-        var deciding = InRange(db, scorecardId, query).Where(s => s.Deciding && s.Score != null);
+        var deciding = InRange(db.DecisionScores, scorecardId, query).Where(s => s.Deciding && s.Score != null);
         var cells = await SplitAsync(
             db,
             deciding.GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand })
@@ -61,7 +61,7 @@ public static class ReportAggregates
     {
         // The champion is picked here, not in SQL: an equality on a column in the middle of an
         // index makes SQLite sort the rows instead of streaming the groups.
-        var scores = InRange(db, scorecardId, query).Where(s => s.Version == versionA && s.Score != null && s.ChampionScore != null);
+        var scores = InRange(db.DecisionScores, scorecardId, query).Where(s => s.Version == versionA && s.Score != null && s.ChampionScore != null);
         var cells = await SplitAsync(
             db,
             scores.GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.ChampionVersion, s.ChampionScore })
@@ -77,19 +77,26 @@ public static class ReportAggregates
 
     /// <summary>One version's scores per application date (for the population stability index).</summary>
     public static Task<List<DailyScoreCell>> DailyScoresAsync(LedgerlineDbContext db, long scorecardId, int version, ReportQuery query, CancellationToken ct) =>
-        InRange(db, scorecardId, query)
+        InRange(db.DecisionScores, scorecardId, query)
             .Where(s => s.Version == version && s.Score != null)
             .GroupBy(s => new { s.ApplicationDate, s.Score })
             .Select(g => new DailyScoreCell(g.Key.ApplicationDate, g.Key.Score!.Value, g.LongCount()))
             .ToListAsync(ct);
 
-    /// <summary>One version's matched bins per application date (for the characteristic stability indexes).</summary>
-    public static Task<List<DailyBinsCell>> DailyBinsAsync(LedgerlineDbContext db, long scorecardId, int version, ReportQuery query, CancellationToken ct) =>
-        InRange(db, scorecardId, query)
+    /// <summary>
+    /// One version's matched bins, one row per score in the range, streamed (for the characteristic
+    /// stability indexes). No index holds the bins, so on SQLite the table is read straight through:
+    /// looking each row up from the report index, in score order, took ten times as long on a
+    /// million decisions (4.0 against 0.4 s), and grouping the bin strings in SQL sorted them all.
+    /// </summary>
+    public static IAsyncEnumerable<DailyBins> DailyBinsAsync(LedgerlineDbContext db, long scorecardId, int version, ReportQuery query)
+    {
+        var table = db.Database.IsSqlite() ? db.DecisionScores.FromSqlRaw("SELECT * FROM \"DecisionScores\" NOT INDEXED") : db.DecisionScores;
+        return InRange(table, scorecardId, query)
             .Where(s => s.Version == version && s.MatchedBins != null)
-            .GroupBy(s => new { s.ApplicationDate, s.MatchedBins })
-            .Select(g => new DailyBinsCell(g.Key.ApplicationDate, g.Key.MatchedBins!, g.LongCount()))
-            .ToListAsync(ct);
+            .Select(s => new DailyBins(s.ApplicationDate, s.MatchedBins!))
+            .AsAsyncEnumerable();
+    }
 
     private const string ApproveWord = "approve";
 
@@ -171,9 +178,9 @@ public static class ReportAggregates
         public ValueTask DisposeAsync() => ValueTask.CompletedTask;
     }
 
-    private static IQueryable<DecisionScore> InRange(LedgerlineDbContext db, long scorecardId, ReportQuery query)
+    private static IQueryable<DecisionScore> InRange(IQueryable<DecisionScore> table, long scorecardId, ReportQuery query)
     {
-        var scores = db.DecisionScores.AsNoTracking().Where(s => s.ScorecardId == scorecardId);
+        var scores = table.AsNoTracking().Where(s => s.ScorecardId == scorecardId);
         if (query.From is { } from)
         {
             scores = scores.Where(s => s.ApplicationDate >= from);
@@ -210,5 +217,5 @@ public sealed record PairCell(decimal ScoreA, decimal ScoreB, bool Approved, boo
 /// <summary>Applications of one date with one score.</summary>
 public sealed record DailyScoreCell(DateOnly Date, decimal Score, long Count);
 
-/// <summary>Applications of one date with one combination of matched bins.</summary>
-public sealed record DailyBinsCell(DateOnly Date, string MatchedBins, long Count);
+/// <summary>One score's application date and matched bins.</summary>
+public sealed record DailyBins(DateOnly Date, string MatchedBins);

@@ -104,7 +104,12 @@ public sealed class ReportBuilder(LedgerlineDbContext db, VersionCache cache)
         }
 
         var scores = await ReportAggregates.DailyScoresAsync(db, scorecard.Id, version.Number, query, ct);
-        var bins = await ReportAggregates.DailyBinsAsync(db, scorecard.Id, version.Number, query, ct);
+        var bins = new BinTally(version.Compiled);
+        await foreach (var row in ReportAggregates.DailyBinsAsync(db, scorecard.Id, version.Number, query).WithCancellation(ct))
+        {
+            bins.Add(row.Date, row.MatchedBins);
+        }
+
         var periods = StabilityCalculator.Compute(version.Baseline, version.Compiled, scores, bins, query.Period, figure);
         return new StabilityReport(scorecard.Key, version.Number, true, periods.Count == 0 ? "No applications in the range." : null,
             period, query.RangeText, population, StabilityCalculator.EmptyBinRuleText, figure, periods);

@@ -17,12 +17,23 @@ public static class StabilityCalculator
         : string.Create(CultureInfo.InvariantCulture, $"{ISOWeek.GetYear(date.ToDateTime(TimeOnly.MinValue))}-W{ISOWeek.GetWeekOfYear(date.ToDateTime(TimeOnly.MinValue)):00}");
 
     public static List<StabilityPeriod> Compute(
-        BaselineAggregates baseline, CompiledScorecard compiled, IReadOnlyList<DailyScoreCell> scores, IReadOnlyList<DailyBinsCell> bins,
+        BaselineAggregates baseline, CompiledScorecard compiled, IReadOnlyList<DailyScoreCell> scores, BinTally bins,
         ReportPeriod period, StabilityThresholdsFigure thresholds)
     {
         var cutPoints = baseline.ScoreBins.Where(b => b.UpTo is not null).Select(b => b.UpTo!.Value).ToArray();
         var expectedScores = baseline.ScoreBins.Select(b => b.Count).ToArray();
-        var binsByPeriod = bins.GroupBy(b => Period(b.Date, period)).ToDictionary(g => g.Key, g => g.ToList(), StringComparer.Ordinal);
+        var binsByPeriod = new Dictionary<string, long[][]>(StringComparer.Ordinal);
+        foreach (var (date, counts) in bins.Days)
+        {
+            var key = Period(date, period);
+            if (!binsByPeriod.TryGetValue(key, out var total))
+            {
+                binsByPeriod[key] = total = bins.NewCounts();
+            }
+
+            BinTally.AddInto(total, counts);
+        }
+
         var periods = new List<StabilityPeriod>();
         foreach (var group in scores.GroupBy(s => Period(s.Date, period)).OrderBy(g => g.Key, StringComparer.Ordinal))
         {
@@ -34,7 +45,7 @@ public static class StabilityCalculator
 
             var n = actual.Sum();
             var psi = StabilityIndex.Compute(expectedScores, actual);
-            var characteristics = Characteristics(baseline, compiled, binsByPeriod.GetValueOrDefault(group.Key) ?? [], thresholds);
+            var characteristics = Characteristics(baseline, compiled, binsByPeriod.GetValueOrDefault(group.Key) ?? bins.NewCounts(), thresholds);
             periods.Add(new StabilityPeriod(group.Key, n, psi.Value,
                 psi.Value is { } value ? StabilityBands.Classify(value, thresholds.PsiAmber, thresholds.PsiRed) : null,
                 characteristics, psi.Reason));
@@ -44,30 +55,9 @@ public static class StabilityCalculator
     }
 
     private static List<CharacteristicStability> Characteristics(
-        BaselineAggregates baseline, CompiledScorecard compiled, List<DailyBinsCell> cells, StabilityThresholdsFigure thresholds)
+        BaselineAggregates baseline, CompiledScorecard compiled, long[][] actual, StabilityThresholdsFigure thresholds)
     {
         var definitions = compiled.Definition.Characteristics;
-        // Per characteristic: one count per bin, then missing, then other.
-        var actual = definitions.Select(d => new long[d.Bins.Count + 2]).ToArray();
-        foreach (var cell in cells)
-        {
-            var parts = cell.MatchedBins.Split(',');
-            for (var i = 0; i < parts.Length && i < actual.Length; i++)
-            {
-                var bin = int.Parse(parts[i], NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture);
-                var slot = bin switch
-                {
-                    MatchedBin.Missing => actual[i].Length - 2,
-                    MatchedBin.Other => actual[i].Length - 1,
-                    _ => bin,
-                };
-                if (slot >= 0 && slot < actual[i].Length)
-                {
-                    actual[i][slot] += cell.Count;
-                }
-            }
-        }
-
         var result = new List<CharacteristicStability>(definitions.Count);
         for (var i = 0; i < definitions.Count; i++)
         {
