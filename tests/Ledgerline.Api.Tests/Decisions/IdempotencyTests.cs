@@ -27,6 +27,28 @@ public sealed class IdempotencyTests
     }
 
     [Fact]
+    public async Task Decide_StoredRequestHash_IsSha256OfTheCanonicalFormAndStaysTheSame()
+    {
+        await using var app = new LedgerlineApp();
+        var setup = await LiveScoringSetup.WithPlanAsync(app);
+        var body = JsonNode.Parse("""
+            { "characteristics": { "residentialStatus": "tenant", "monthsAtAddress": 30.0 },
+              "applicationDate": "2026-01-15", "applicationId": "APP-H1" }
+            """)!;
+
+        (await setup.DecideAsync(body)).EnsureSuccessStatusCode();
+
+        // Replays of decisions logged by earlier releases compare against stored hashes, so the
+        // canonical form must never drift. Expected value: Python 3.11 hashlib.sha256 of
+        // {"applicationId":"APP-H1","assignmentKey":null,"applicationDate":"2026-01-15",
+        // "characteristics":{"monthsAtAddress":30,"residentialStatus":"tenant"}} (UTF-8, no spaces).
+        using var connection = app.OpenDatabase();
+        using var command = connection.CreateCommand();
+        command.CommandText = "SELECT \"RequestHash\" FROM \"Decisions\"";
+        Assert.Equal("e9a310941906dc1b424ddad1fa0bdc1035f16741f56965e7185d6ec82b3f2e93", command.ExecuteScalar());
+    }
+
+    [Fact]
     public async Task Decide_SameIdempotencyKeyDifferentBody_Answers409SayingWhy()
     {
         await using var app = new LedgerlineApp();

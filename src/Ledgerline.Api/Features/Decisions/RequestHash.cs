@@ -22,10 +22,13 @@ public static class RequestHash
             writer.WriteString("assignmentKey", request.AssignmentKey);
             writer.WriteString("applicationDate", request.ApplicationDate);
             writer.WriteStartObject("characteristics");
-            foreach (var (name, value) in (request.Characteristics ?? []).OrderBy(c => c.Key, StringComparer.Ordinal))
+            var characteristics = request.Characteristics ?? [];
+            var names = characteristics.Keys.ToArray();
+            Array.Sort(names, StringComparer.Ordinal);
+            foreach (var name in names)
             {
                 writer.WritePropertyName(name);
-                WriteCanonical(writer, value);
+                WriteCanonical(writer, characteristics[name]);
             }
 
             writer.WriteEndObject();
@@ -40,7 +43,9 @@ public static class RequestHash
         switch (value.ValueKind)
         {
             case JsonValueKind.Number when value.TryGetDecimal(out var number):
-                writer.WriteRawValue(CanonicalNumber.Format(number));
+                // The canonical form is a plain JSON number by construction; checking it again cost
+                // a parse per number on the hot path.
+                writer.WriteRawValue(CanonicalNumber.Format(number), skipInputValidation: true);
                 break;
             case JsonValueKind.String:
                 writer.WriteStringValue(value.GetString());
