@@ -17,5 +17,13 @@ public sealed class DatabaseOptions
     /// </summary>
     public bool? MigrateOnStart { get; set; }
 
+    /// <summary>
+    /// SQLite: how long the write-ahead log may grow, in 4 KB frames, before it is made to start
+    /// over (see <see cref="SqliteLogRestart"/>): the disk it may take against how often the decision
+    /// log pauses for the restart.
+    /// </summary>
+    [Range(64, int.MaxValue)]
+    public int SqliteLogRestartFrames { get; set; } = 65536;
+
     public bool IsPostgres => Provider == "Postgres";
 }

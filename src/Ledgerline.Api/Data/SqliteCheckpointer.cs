@@ -62,7 +62,7 @@ internal sealed partial class SqliteCheckpointer(IServiceScopeFactory scopes, Sq
 
             // Asked even when the passes did not catch up (a machine short of CPU, a reader still on
             // older frames): the writer then copies more at once, but the log stops growing.
-            if (frames >= SqliteLogRestart.FramesWorthRestarting)
+            if (frames >= restart.FramesWorthRestarting)
             {
                 restart.Request();
             }

@@ -12,7 +12,8 @@ public sealed class DecisionLogFileTests
     [Fact]
     public async Task Decide_UnderSustainedLoad_TheWriteAheadLogStartsOver()
     {
-        await using var app = new LedgerlineApp();
+        // A 4 MB log is restarted: the default waits for 256 MB, more than the test writes.
+        await using var app = new LedgerlineApp(new Dictionary<string, string?> { ["Database:SqliteLogRestartFrames"] = "1024" });
         var setup = await LiveScoringSetup.WithPlanAsync(app);
         var log = new SqliteConnectionStringBuilder(app.ConnectionString).DataSource + "-wal";
         // An idle connection held open keeps the log file itself: when the last connection closes
@@ -50,6 +51,16 @@ public sealed class DecisionLogFileTests
 
         Assert.Equal(0, failures);
         Assert.True(after != before, $"the log did not start over in 8 s of load (its first salt stayed {before})");
+    }
+
+    [Fact]
+    public async Task Start_LogRestartBelow64Frames_FailsNamingTheSetting()
+    {
+        await using var app = new LedgerlineApp(new Dictionary<string, string?> { ["Database:SqliteLogRestartFrames"] = "10" });
+
+        var error = Assert.ThrowsAny<Exception>(() => app.CreateClient());
+
+        Assert.Contains("SqliteLogRestartFrames", error.ToString(), StringComparison.Ordinal);
     }
 
     /// <summary>
