@@ -162,18 +162,15 @@ public sealed class DecisionWriter : IHostedService, IDisposable
 
     /// <summary>
     /// Copies the frames committed since the background checkpoint, so that the next batch begins on
-    /// a fully copied log and SQLite writes it from the start. While a reader still holds older
-    /// frames the copy stops short; the request then stands for the next batch.
+    /// a fully copied log and SQLite writes it from the start. While a reader (a long report) still
+    /// holds older frames the copy stops short and the log carries on; the checkpointer asks again a
+    /// second later rather than this writer paying for a copy before every batch meanwhile.
     /// </summary>
-    private void CopyRestOfLog(DbConnection connection)
+    private static void CopyRestOfLog(DbConnection connection)
     {
         using var command = connection.CreateCommand();
         command.CommandText = "PRAGMA wal_checkpoint(PASSIVE);";
-        using var result = command.ExecuteReader();
-        if (!result.Read() || result.GetInt64(0) != 0 || result.GetInt64(1) != result.GetInt64(2))
-        {
-            _logRestart.Request();
-        }
+        command.ExecuteNonQuery();
     }
 
     /// <summary>
