@@ -1,3 +1,4 @@
+using System.Data.Common;
 using Microsoft.EntityFrameworkCore;
 
 namespace Ledgerline.Api.Data;
@@ -73,7 +74,7 @@ internal sealed partial class SqliteCheckpointer(IServiceScopeFactory scopes, Sq
         }
     }
 
-    private static async Task<(long Frames, long Copied)> PassAsync(System.Data.Common.DbCommand command, CancellationToken ct)
+    private static async Task<(long Frames, long Copied)> PassAsync(DbCommand command, CancellationToken ct)
     {
         await using var result = await command.ExecuteReaderAsync(ct);
         return await result.ReadAsync(ct) && result.GetInt64(0) == 0 ? (result.GetInt64(1), result.GetInt64(2)) : (0, 0);

@@ -4,24 +4,32 @@ using Ledgerline.Scoring.Engine;
 namespace Ledgerline.Api.Features.Reports;
 
 /// <summary>
-/// Counts of matched bins per application date and characteristic, filled one score at a time as
-/// the rows stream in: a year of a busy version is close to a million rows, which are never held.
+/// Counts of matched bins per report period and characteristic, filled one score at a time as the
+/// rows stream in: a year of a busy version is close to a million rows, which are never held.
 /// Per characteristic the counts run over its bins, then missing, then other.
 /// </summary>
-public sealed class BinTally(CompiledScorecard compiled)
+public sealed class BinTally(CompiledScorecard compiled, Func<DateOnly, string> periodOf)
 {
+    private readonly Dictionary<string, long[][]> _byPeriod = new(StringComparer.Ordinal);
+
+    // Each date's period counts, so the period is worked out once per date, not once per row.
     private readonly Dictionary<DateOnly, long[][]> _byDate = [];
 
-    public IEnumerable<KeyValuePair<DateOnly, long[][]>> Days => _byDate;
-
-    public long[][] NewCounts() => compiled.Definition.Characteristics.Select(d => new long[d.Bins.Count + 2]).ToArray();
+    /// <summary>The counts of one period (all zero when no score fell in it).</summary>
+    public long[][] For(string period) => _byPeriod.GetValueOrDefault(period) ?? NewCounts();
 
     /// <summary>Adds one score's matched bins ("3,0,-1,…": bin per characteristic in version order).</summary>
     public void Add(DateOnly date, string matchedBins)
     {
         if (!_byDate.TryGetValue(date, out var counts))
         {
-            _byDate[date] = counts = NewCounts();
+            var period = periodOf(date);
+            if (!_byPeriod.TryGetValue(period, out counts))
+            {
+                _byPeriod[period] = counts = NewCounts();
+            }
+
+            _byDate[date] = counts;
         }
 
         var text = matchedBins.AsSpan();
@@ -48,14 +56,5 @@ public sealed class BinTally(CompiledScorecard compiled)
         }
     }
 
-    public static void AddInto(long[][] total, long[][] counts)
-    {
-        for (var i = 0; i < total.Length; i++)
-        {
-            for (var j = 0; j < total[i].Length; j++)
-            {
-                total[i][j] += counts[i][j];
-            }
-        }
-    }
+    private long[][] NewCounts() => compiled.Definition.Characteristics.Select(d => new long[d.Bins.Count + 2]).ToArray();
 }

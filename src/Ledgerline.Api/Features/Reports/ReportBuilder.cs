@@ -104,7 +104,7 @@ public sealed class ReportBuilder(LedgerlineDbContext db, VersionCache cache)
         }
 
         var scores = await ReportAggregates.DailyScoresAsync(db, scorecard.Id, version.Number, query, ct);
-        var bins = new BinTally(version.Compiled);
+        var bins = new BinTally(version.Compiled, date => StabilityCalculator.Period(date, query.Period));
         await foreach (var row in ReportAggregates.DailyBinsAsync(db, scorecard.Id, version.Number, query).WithCancellation(ct))
         {
             bins.Add(row.Date, row.MatchedBins);

@@ -22,18 +22,6 @@ public static class StabilityCalculator
     {
         var cutPoints = baseline.ScoreBins.Where(b => b.UpTo is not null).Select(b => b.UpTo!.Value).ToArray();
         var expectedScores = baseline.ScoreBins.Select(b => b.Count).ToArray();
-        var binsByPeriod = new Dictionary<string, long[][]>(StringComparer.Ordinal);
-        foreach (var (date, counts) in bins.Days)
-        {
-            var key = Period(date, period);
-            if (!binsByPeriod.TryGetValue(key, out var total))
-            {
-                binsByPeriod[key] = total = bins.NewCounts();
-            }
-
-            BinTally.AddInto(total, counts);
-        }
-
         var periods = new List<StabilityPeriod>();
         foreach (var group in scores.GroupBy(s => Period(s.Date, period)).OrderBy(g => g.Key, StringComparer.Ordinal))
         {
@@ -45,7 +33,7 @@ public static class StabilityCalculator
 
             var n = actual.Sum();
             var psi = StabilityIndex.Compute(expectedScores, actual);
-            var characteristics = Characteristics(baseline, compiled, binsByPeriod.GetValueOrDefault(group.Key) ?? bins.NewCounts(), thresholds);
+            var characteristics = Characteristics(baseline, compiled, bins.For(group.Key), thresholds);
             periods.Add(new StabilityPeriod(group.Key, n, psi.Value,
                 psi.Value is { } value ? StabilityBands.Classify(value, thresholds.PsiAmber, thresholds.PsiRed) : null,
                 characteristics, psi.Reason));
