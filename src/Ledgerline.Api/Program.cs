@@ -1,5 +1,6 @@
 using Ledgerline.Api.Data;
 using Ledgerline.Api.Features.Access;
+using Ledgerline.Api.Features.Alerts;
 using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Api.Features.Demo;
@@ -12,16 +13,17 @@ using Ledgerline.Api.Http;
 
 var builder = WebApplication.CreateBuilder(HostArguments.For(args));
 
-builder.AddLedgerlineDemo();
+// The demo goes first: without a connection string it picks its own SQLite file.
+builder.AddDemo();
 builder.AddLedgerlineData();
 builder.Services.AddSingleton(TimeProvider.System);
 builder.Services.AddLedgerlineHttp();
-builder.Services.AddLedgerlineAccess();
+builder.Services.AddAccess();
 builder.Services.AddScorecards();
 builder.Services.AddTraffic();
 builder.Services.AddDecisions();
-builder.Services.AddOutcomes();
 builder.Services.AddReports();
+builder.Services.AddAlerts();
 ValidationNames.UseJsonNames();
 
 var app = builder.Build();
@@ -31,12 +33,15 @@ app.UseAuthentication();
 app.UseLedgerlineLimits();
 app.UseAuthorization();
 
-app.MapScorecardRegistry();
+app.MapScorecards();
+app.MapVersions();
+app.MapBaselines();
 app.MapTraffic();
 app.MapDecisions();
 app.MapOutcomes();
 app.MapReports();
 app.MapOverview();
+app.MapAlerts();
 app.MapAccess();
 app.MapAudit();
 app.MapHealthChecks("/health").AllowAnonymous();

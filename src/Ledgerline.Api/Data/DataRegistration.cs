@@ -1,3 +1,5 @@
+using Ledgerline.Api.Data.Postgres;
+using Ledgerline.Api.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 
 namespace Ledgerline.Api.Data;
@@ -26,15 +28,17 @@ public static class DataRegistration
             }
 
             builder.Services.AddDbContextPool<LedgerlineDbContext, PostgresLedgerlineDbContext>(o => o.UseNpgsql(connectionString));
+            builder.Services.AddSingleton<StoreDialect, PostgresDialect>();
         }
         else
         {
             var sqlite = string.IsNullOrWhiteSpace(connectionString) ? DefaultSqliteConnectionString : connectionString;
             builder.Services.AddDbContextPool<LedgerlineDbContext, SqliteLedgerlineDbContext>(o => o.UseSqlite(sqlite).AddInterceptors(new SqlitePragmas()));
+            builder.Services.AddSingleton<StoreDialect, SqliteDialect>();
+            // The write-ahead log's upkeep: checkpoints off the request path, and restarts under load.
+            builder.Services.AddSingleton<SqliteLogRestart>();
             builder.Services.AddHostedService<SqliteCheckpointer>();
         }
-
-        builder.Services.AddSingleton<SqliteLogRestart>();
 
         builder.Services.AddHealthChecks().AddCheck<DatabaseHealthCheck>("database");
         return builder;
@@ -54,13 +58,7 @@ public static class DataRegistration
 
         await using var scope = app.Services.CreateAsyncScope();
         var db = scope.ServiceProvider.GetRequiredService<LedgerlineDbContext>();
-        if (!options.IsPostgres)
-        {
-            // WAL lets readers (reports) run beside the writer (decisions); it persists in the file.
-            await db.Database.OpenConnectionAsync();
-            await db.Database.ExecuteSqlRawAsync("PRAGMA journal_mode=WAL;");
-        }
-
+        await StoreDialect.Of(db).PrepareStoreAsync(db, CancellationToken.None);
         await db.Database.MigrateAsync();
     }
 }

@@ -1,4 +1,5 @@
 using System.ComponentModel.DataAnnotations;
+using Ledgerline.Api.Data.Sqlite;
 
 namespace Ledgerline.Api.Data;
 

@@ -1,3 +1,5 @@
+using Ledgerline.Api.Data.Postgres;
+using Ledgerline.Api.Data.Sqlite;
 using Microsoft.EntityFrameworkCore;
 using Microsoft.EntityFrameworkCore.Design;
 

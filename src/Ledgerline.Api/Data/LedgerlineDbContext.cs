@@ -1,10 +1,11 @@
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Features.Access;
 using Ledgerline.Api.Features.Alerts;
-using Ledgerline.Api.Features.Audit;
-using Ledgerline.Api.Features.Decisions;
-using Ledgerline.Api.Features.Outcomes;
+using Ledgerline.Api.Features.Reports;
 using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Api.Features.Traffic;
+using Ledgerline.Api.Ledger;
+using Ledgerline.Scoring.Scorecards;
 using Microsoft.EntityFrameworkCore;
 
 namespace Ledgerline.Api.Data;
@@ -35,7 +36,7 @@ public abstract class LedgerlineDbContext(DbContextOptions options) : DbContext(
 
     public DbSet<Alert> Alerts => Set<Alert>();
 
-    public DbSet<AlertThresholds> AlertThresholds => Set<AlertThresholds>();
+    public DbSet<MonitoringThresholds> MonitoringThresholds => Set<MonitoringThresholds>();
 
     public DbSet<AlertDelivery> AlertDeliveries => Set<AlertDelivery>();
 
@@ -51,7 +52,7 @@ public abstract class LedgerlineDbContext(DbContextOptions options) : DbContext(
         modelBuilder.ApplyConfiguration(new ApiKeyConfiguration());
         modelBuilder.ApplyConfiguration(new AuditEntryConfiguration());
         modelBuilder.ApplyConfiguration(new AlertConfiguration());
-        modelBuilder.ApplyConfiguration(new AlertThresholdsConfiguration());
+        modelBuilder.ApplyConfiguration(new MonitoringThresholdsConfiguration());
         modelBuilder.ApplyConfiguration(new AlertDeliveryConfiguration());
     }
 
@@ -68,5 +69,6 @@ public abstract class LedgerlineDbContext(DbContextOptions options) : DbContext(
     {
         // Enums are stored as their names: readable in SQL, and safe against reordering.
         configurationBuilder.Properties<Enum>().HaveConversion<string>().HaveMaxLength(32);
+        configurationBuilder.Properties<Band>().HaveConversion<BandWordConverter>().HaveMaxLength(16);
     }
 }

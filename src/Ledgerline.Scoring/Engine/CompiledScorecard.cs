@@ -13,7 +13,7 @@ public sealed class CompiledScorecard
     private readonly CompiledCharacteristic[] _characteristics;
     private readonly FrozenDictionary<string, int> _indexByName;
     private readonly decimal[] _bandMinimums;
-    private readonly Decision[] _bandDecisions;
+    private readonly Band[] _bands;
 
     private CompiledScorecard(ScorecardDefinition definition)
     {
@@ -25,7 +25,7 @@ public sealed class CompiledScorecard
             .ToFrozenDictionary(StringComparer.Ordinal);
         var bands = definition.DecisionBands;
         _bandMinimums = bands.Take(bands.Count - 1).Select(b => b.MinScore!.Value).ToArray();
-        _bandDecisions = bands.Select(b => b.Decision).ToArray();
+        _bands = bands.Select(b => b.Band).ToArray();
     }
 
     /// <summary>The definition this was compiled from.</summary>
@@ -88,21 +88,21 @@ public sealed class CompiledScorecard
         }
 
         failure = null;
-        return new ScoreResult(total, Scaling.ProbabilityOfBad(total), DecisionFor(total), bins, points, RankReasons(bins));
+        return new ScoreResult(total, Scaling.ProbabilityOfBad(total), BandFor(total), bins, points, RankReasons(bins));
     }
 
     /// <summary>The decision band a score falls in (bands read top down).</summary>
-    public Decision DecisionFor(decimal score)
+    public Band BandFor(decimal score)
     {
         for (var i = 0; i < _bandMinimums.Length; i++)
         {
             if (score >= _bandMinimums[i])
             {
-                return _bandDecisions[i];
+                return _bands[i];
             }
         }
 
-        return _bandDecisions[^1];
+        return _bands[^1];
     }
 
     /// <summary>

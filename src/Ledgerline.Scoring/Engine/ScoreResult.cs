@@ -15,14 +15,14 @@ public static class MatchedBin
 /// <summary>The score of one application by one version.</summary>
 /// <param name="Score">Base points plus the points of every characteristic, exact.</param>
 /// <param name="ProbabilityOfBad">PD from the version's scaling: 1 / (1 + odds(score)).</param>
-/// <param name="Decision">The decision band the score falls in.</param>
+/// <param name="Band">The decision band the score falls in.</param>
 /// <param name="MatchedBins">Per characteristic (version order): the bin index, or a <see cref="MatchedBin"/> constant.</param>
 /// <param name="Points">Per characteristic (version order): the points it contributed.</param>
 /// <param name="ReasonCodes">The characteristics that cost the most points, most first.</param>
 public sealed record ScoreResult(
     decimal Score,
     double ProbabilityOfBad,
-    Decision Decision,
+    Band Band,
     int[] MatchedBins,
     decimal[] Points,
     ReasonCode[] ReasonCodes);

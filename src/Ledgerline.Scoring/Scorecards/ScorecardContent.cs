@@ -39,7 +39,7 @@ public static class ScorecardContent
             {
                 w.WriteStartObject();
                 WriteOptional(w, "minScore", band.MinScore);
-                w.WriteString("decision", DecisionNames.ToWire(band.Decision));
+                w.WriteString("decision", BandNames.ToWire(band.Band));
                 w.WriteEndObject();
             }
 

@@ -64,13 +64,13 @@ public sealed record CharacteristicDefinition(
 /// </summary>
 public sealed record BinDefinition(decimal? From, decimal? UpTo, IReadOnlyList<string>? Values, decimal Points);
 
-/// <summary>A decision band: scores at or above <paramref name="MinScore"/> get <paramref name="Decision"/>.</summary>
+/// <summary>A decision band: scores at or above <paramref name="MinScore"/> get <paramref name="Band"/>.</summary>
 /// <param name="MinScore">Lowest score of the band; null only on the last (catch-all) band.</param>
-/// <param name="Decision">The decision for scores in the band.</param>
-public sealed record DecisionBand(decimal? MinScore, Decision Decision);
+/// <param name="Band">What scores in the band are told: approve, refer or decline.</param>
+public sealed record DecisionBand(decimal? MinScore, Band Band);
 
 /// <summary>What a decision band tells the origination system to do.</summary>
-public enum Decision
+public enum Band
 {
     /// <summary>Approve the application.</summary>
     Approve,

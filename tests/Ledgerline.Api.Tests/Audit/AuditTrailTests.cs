@@ -1,7 +1,7 @@
 using System.Net;
 using System.Net.Http.Json;
 using System.Text.Json;
-using Ledgerline.Api.Features.Audit;
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Tests.Infrastructure;
 
 namespace Ledgerline.Api.Tests.Audit;

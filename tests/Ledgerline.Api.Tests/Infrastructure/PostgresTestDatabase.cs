@@ -1,5 +1,5 @@
 using System.Data.Common;
-using Ledgerline.Api.Data;
+using Ledgerline.Api.Data.Postgres;
 using Microsoft.EntityFrameworkCore;
 using Npgsql;
 

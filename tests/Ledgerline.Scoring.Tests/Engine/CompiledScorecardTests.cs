@@ -95,13 +95,13 @@ public sealed class CompiledScorecardTests
 
     [Theory]
     // Bands are read top down: the first whose minScore the score reaches (120 approve, 100 refer).
-    [InlineData("120", Decision.Approve)]
-    [InlineData("119.9999", Decision.Refer)]
-    [InlineData("100", Decision.Refer)]
-    [InlineData("99.9999", Decision.Decline)]
-    [InlineData("-5", Decision.Decline)]
-    public void DecisionFor_ScoreAroundCutOffs_TakesFirstBandReached(string score, Decision expected) =>
-        Assert.Equal(expected, Contract.DecisionFor(decimal.Parse(score, System.Globalization.CultureInfo.InvariantCulture)));
+    [InlineData("120", Band.Approve)]
+    [InlineData("119.9999", Band.Refer)]
+    [InlineData("100", Band.Refer)]
+    [InlineData("99.9999", Band.Decline)]
+    [InlineData("-5", Band.Decline)]
+    public void BandFor_ScoreAroundCutOffs_TakesFirstBandReached(string score, Band expected) =>
+        Assert.Equal(expected, Contract.BandFor(decimal.Parse(score, System.Globalization.CultureInfo.InvariantCulture)));
 
     [Fact]
     public void Score_SameInputTwice_GivesIdenticalExactScore()
@@ -127,7 +127,7 @@ public sealed class CompiledScorecardTests
     [Fact]
     public void Compile_InvalidTable_ThrowsListingProblems()
     {
-        var table = Tables.Contract() with { DecisionBands = [new DecisionBand(600m, Decision.Approve)] };
+        var table = Tables.Contract() with { DecisionBands = [new DecisionBand(600m, Band.Approve)] };
 
         var error = Assert.Throws<ArgumentException>(() => CompiledScorecard.Compile(table));
         Assert.Contains("decisionBands[0].minScore", error.Message, StringComparison.Ordinal);

@@ -61,6 +61,6 @@ public sealed class GermanCreditScoringTests
                 Number(c, "otherPoints"))).ToList(),
             json.GetProperty("decisionBands").EnumerateArray().Select(b => new DecisionBand(
                 Number(b, "minScore"),
-                DecisionNames.TryParse(b.GetProperty("decision").GetString(), out var d) ? d : throw new InvalidDataException())).ToList());
+                BandNames.TryParse(b.GetProperty("decision").GetString(), out var d) ? d : throw new InvalidDataException())).ToList());
     }
 }

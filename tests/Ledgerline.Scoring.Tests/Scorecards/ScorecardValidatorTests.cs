@@ -83,7 +83,7 @@ public sealed class ScorecardValidatorTests
     {
         var problems = Check(Tables.Contract() with
         {
-            DecisionBands = [new DecisionBand(500m, Decision.Refer), new DecisionBand(600m, Decision.Approve), new DecisionBand(400m, Decision.Decline)],
+            DecisionBands = [new DecisionBand(500m, Band.Refer), new DecisionBand(600m, Band.Approve), new DecisionBand(400m, Band.Decline)],
         });
 
         Assert.Contains(problems, p => p.Path == "decisionBands[1].minScore" && p.Message.Contains("must fall", StringComparison.Ordinal));

@@ -15,9 +15,9 @@ internal static class Tables
 
     public static IReadOnlyList<DecisionBand> Bands(decimal approve, decimal refer) =>
     [
-        new DecisionBand(approve, Decision.Approve),
-        new DecisionBand(refer, Decision.Refer),
-        new DecisionBand(null, Decision.Decline),
+        new DecisionBand(approve, Band.Approve),
+        new DecisionBand(refer, Band.Refer),
+        new DecisionBand(null, Band.Decline),
     ];
 
     /// <summary>The wire contract's example table: months at address and residential status.</summary>

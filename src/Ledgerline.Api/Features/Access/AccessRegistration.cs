@@ -1,6 +1,6 @@
 using FluentValidation;
 using Ledgerline.Api.Data;
-using Ledgerline.Api.Features.Audit;
+using Ledgerline.Api.Data.Audit;
 using Microsoft.AspNetCore.Authentication;
 using Microsoft.AspNetCore.Authorization;
 using Microsoft.EntityFrameworkCore;
@@ -9,7 +9,7 @@ namespace Ledgerline.Api.Features.Access;
 
 public static class AccessRegistration
 {
-    public static IServiceCollection AddLedgerlineAccess(this IServiceCollection services)
+    public static IServiceCollection AddAccess(this IServiceCollection services)
     {
         services.AddMemoryCache();
         services.AddAuthentication(ApiKeyAuthentication.SchemeName)

@@ -21,16 +21,6 @@ internal sealed class AlertConfiguration : IEntityTypeConfiguration<Alert>
     }
 }
 
-internal sealed class AlertThresholdsConfiguration : IEntityTypeConfiguration<AlertThresholds>
-{
-    public void Configure(EntityTypeBuilder<AlertThresholds> builder)
-    {
-        builder.HasKey(t => t.ScorecardId);
-        builder.HasOne<Scorecard>().WithOne().HasForeignKey<AlertThresholds>(t => t.ScorecardId);
-        builder.Property(t => t.UpdatedBy).HasMaxLength(200);
-    }
-}
-
 internal sealed class AlertDeliveryConfiguration : IEntityTypeConfiguration<AlertDelivery>
 {
     public void Configure(EntityTypeBuilder<AlertDelivery> builder)

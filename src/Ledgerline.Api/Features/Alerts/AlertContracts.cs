@@ -1,3 +1,4 @@
+using Ledgerline.Api.Features.Reports;
 namespace Ledgerline.Api.Features.Alerts;
 
 public sealed record AlertResponse(
@@ -39,7 +40,7 @@ public sealed record AlertThresholdsResponse(
     DateTimeOffset? UpdatedAt,
     string? UpdatedBy)
 {
-    public static AlertThresholdsResponse From(AlertThresholds t, bool defaults) =>
+    public static AlertThresholdsResponse From(MonitoringThresholds t, bool defaults) =>
         new(t.PsiAmber, t.PsiRed, t.CsiAmber, t.CsiRed, t.AucDecline, t.HosmerLemeshowP, t.SampleRatioP, defaults, t.UpdatedAt, t.UpdatedBy);
 }
 

@@ -1,8 +1,9 @@
 using System.Security.Claims;
 using FluentValidation;
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Features.Access;
-using Ledgerline.Api.Features.Audit;
+using Ledgerline.Api.Features.Reports;
 using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Api.Http;
 using Microsoft.AspNetCore.Http.HttpResults;
@@ -12,17 +13,6 @@ namespace Ledgerline.Api.Features.Alerts;
 
 public static class AlertsEndpoints
 {
-    public static IServiceCollection AddAlerts(this IServiceCollection services)
-    {
-        services.AddOptions<AlertOptions>().BindConfiguration(AlertOptions.Section);
-        services.AddSingleton<IValidator<AlertThresholdsRequest>, AlertThresholdsRequestValidator>();
-        services.AddScoped<AlertEvaluator>();
-        services.AddHttpClient(AlertWebhookSender.ClientName, c => c.Timeout = TimeSpan.FromSeconds(10));
-        services.AddHostedService<AlertJob>();
-        services.AddHostedService<AlertWebhookSender>();
-        return services;
-    }
-
     public static IEndpointRouteBuilder MapAlerts(this IEndpointRouteBuilder routes)
     {
         // Risk managers and analysts read alerts and thresholds; only risk managers evaluate on demand or change thresholds.
@@ -65,8 +55,8 @@ public static class AlertsEndpoints
             return ScorecardLookup.NotFound(key);
         }
 
-        var stored = await db.AlertThresholds.AsNoTracking().FirstOrDefaultAsync(t => t.ScorecardId == scorecard.Id, ct);
-        return TypedResults.Ok(AlertThresholdsResponse.From(stored ?? AlertThresholds.Defaults(scorecard.Id), stored is null));
+        var stored = await db.MonitoringThresholds.AsNoTracking().FirstOrDefaultAsync(t => t.ScorecardId == scorecard.Id, ct);
+        return TypedResults.Ok(AlertThresholdsResponse.From(stored ?? MonitoringThresholds.Defaults(scorecard.Id), stored is null));
     }
 
     public static async Task<Results<Ok<AlertThresholdsResponse>, ValidationProblem, ProblemHttpResult>> PutThresholds(
@@ -80,11 +70,11 @@ public static class AlertsEndpoints
 
         var now = clock.GetUtcNow();
         var actor = Actor.Of(user);
-        var stored = await db.AlertThresholds.FirstOrDefaultAsync(t => t.ScorecardId == scorecard.Id, ct);
+        var stored = await db.MonitoringThresholds.FirstOrDefaultAsync(t => t.ScorecardId == scorecard.Id, ct);
         if (stored is null)
         {
-            stored = AlertThresholds.Defaults(scorecard.Id);
-            db.AlertThresholds.Add(stored);
+            stored = MonitoringThresholds.Defaults(scorecard.Id);
+            db.MonitoringThresholds.Add(stored);
         }
 
         stored.PsiAmber = request.PsiAmber!.Value;

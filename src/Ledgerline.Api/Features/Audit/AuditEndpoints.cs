@@ -1,4 +1,5 @@
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Features.Access;
 using Ledgerline.Api.Http;
 using Microsoft.AspNetCore.Http.HttpResults;

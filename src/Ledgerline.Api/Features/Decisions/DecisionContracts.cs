@@ -1,5 +1,8 @@
 using System.Text.Json;
 using Ledgerline.Api.Features.Scorecards;
+using Ledgerline.Scoring.Engine;
+using Ledgerline.Scoring.Outcomes;
+using Ledgerline.Scoring.Scorecards;
 
 namespace Ledgerline.Api.Features.Decisions;
 
@@ -19,10 +22,10 @@ public sealed record DecisionResponse(
     Guid DecisionId,
     string ApplicationId,
     int Version,
-    string Role,
+    ArmRole Role,
     decimal Score,
     double ProbabilityOfBad,
-    string Decision,
+    Band Decision,
     int PlanRevision,
     IReadOnlyList<ReasonCodeResponse> ReasonCodes);
 
@@ -70,10 +73,10 @@ public sealed record DecisionRecordResponse(
     DateTimeOffset DecidedAt,
     int PlanRevision,
     int Version,
-    string Role,
+    ArmRole Role,
     decimal Score,
     double ProbabilityOfBad,
-    string Decision,
+    Band Decision,
     IReadOnlyList<ReasonCodeResponse> ReasonCodes,
     IReadOnlyList<CharacteristicScore> Characteristics,
     IReadOnlyList<VersionScoreResponse> OtherScores,
@@ -89,10 +92,10 @@ public sealed record DecisionRecordResponse(
 /// <param name="Error">Why it could not score the input (the decision stands regardless).</param>
 public sealed record VersionScoreResponse(
     int Version,
-    string Role,
+    ArmRole Role,
     decimal? Score,
     double? ProbabilityOfBad,
-    string? Decision,
+    Band? Decision,
     IReadOnlyList<CharacteristicScore>? Characteristics,
     string? Error);
 
@@ -101,7 +104,7 @@ public sealed record VersionScoreResponse(
 /// <param name="Matured">True once the outcome counts in performance figures.</param>
 /// <param name="ObservedAt">The observation date of the current outcome.</param>
 /// <param name="Observations">Every observation, oldest first.</param>
-public sealed record DecisionOutcomeResponse(string? Status, bool Matured, DateOnly? ObservedAt, IReadOnlyList<OutcomeObservationResponse> Observations);
+public sealed record DecisionOutcomeResponse(PerformanceClass? Status, bool Matured, DateOnly? ObservedAt, IReadOnlyList<OutcomeObservationResponse> Observations);
 
 /// <summary>One posted observation.</summary>
-public sealed record OutcomeObservationResponse(DateOnly ObservedAt, int? WorstDaysPastDue, bool? ChargedOff, string? Status, string? Classified, DateTimeOffset ReceivedAt);
+public sealed record OutcomeObservationResponse(DateOnly ObservedAt, int? WorstDaysPastDue, bool? ChargedOff, PerformanceClass? Status, PerformanceClass? Classified, DateTimeOffset ReceivedAt);

@@ -1,6 +1,7 @@
 using System.Text.Json;
 using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Api.Features.Traffic;
+using Ledgerline.Api.Ledger;
 using Ledgerline.Scoring.Engine;
 using Ledgerline.Scoring.Scorecards;
 
@@ -63,7 +64,7 @@ public static class DecisionMaker
             Role = deciding.Role,
             Score = CanonicalNumber.Normalize(result.Score),
             ProbabilityOfBad = result.ProbabilityOfBad,
-            Band = DecisionNames.ToWire(result.Decision),
+            Band = result.Band,
             ReasonCodes = "",
         };
         var reasons = ScoreMapping.ToResponse(result.ReasonCodes);
@@ -88,19 +89,12 @@ public static class DecisionMaker
         d.Id,
         d.ApplicationId,
         d.Version,
-        RoleName(d.Role),
+        d.Role,
         CanonicalNumber.Normalize(d.Score),
         d.ProbabilityOfBad,
         d.Band,
         d.PlanRevision,
         reasons ?? JsonSerializer.Deserialize<List<ReasonCodeResponse>>(d.ReasonCodes, JsonSerializerOptions.Web) ?? []);
-
-    public static string RoleName(ArmRole role) => role switch
-    {
-        ArmRole.Champion => "champion",
-        ArmRole.Challenger => "challenger",
-        _ => "shadow",
-    };
 
     private static DecisionScore ScoreOther(Decision decision, PlanArm arm, Dictionary<string, JsonElement> input, string path)
     {
@@ -129,7 +123,7 @@ public static class DecisionMaker
         Deciding = deciding,
         Score = CanonicalNumber.Normalize(result.Score),
         ProbabilityOfBad = result.ProbabilityOfBad,
-        Band = DecisionNames.ToWire(result.Decision),
+        Band = result.Band,
         MatchedBins = string.Join(',', result.MatchedBins),
     };
 

@@ -1,7 +1,7 @@
 using System.Text.Json;
 using Ledgerline.Api.Data;
-using Ledgerline.Api.Features.Outcomes;
 using Ledgerline.Api.Features.Scorecards;
+using Ledgerline.Api.Ledger;
 using Ledgerline.Scoring.Engine;
 using Ledgerline.Scoring.Scorecards;
 using Microsoft.EntityFrameworkCore;
@@ -38,7 +38,7 @@ public static class DecisionRecordMapping
         var deciding = d.Scores.FirstOrDefault(s => s.Deciding);
         var others = d.Scores.Where(s => !s.Deciding).OrderBy(s => s.Role).ThenBy(s => s.Version).Select(s => new VersionScoreResponse(
             s.Version,
-            DecisionMaker.RoleName(s.Role),
+            s.Role,
             s.Score is { } score ? CanonicalNumber.Normalize(score) : null,
             s.ProbabilityOfBad,
             s.Band,
@@ -47,10 +47,10 @@ public static class DecisionRecordMapping
         DecisionOutcomeResponse? outcome = d.Outcome is null && observations.Count == 0
             ? null
             : new DecisionOutcomeResponse(
-                d.Outcome?.ToString().ToLowerInvariant(),
+                d.Outcome,
                 d.Matured,
                 d.OutcomeObservedAt,
-                observations.Select(o => new OutcomeObservationResponse(o.ObservedAt, o.WorstDaysPastDue, o.ChargedOff, o.Status, o.Classified?.ToString().ToLowerInvariant(), o.ReceivedAt)).ToList());
+                observations.Select(o => new OutcomeObservationResponse(o.ObservedAt, o.WorstDaysPastDue, o.ChargedOff, o.Status, o.Classified, o.ReceivedAt)).ToList());
         return new DecisionRecordResponse(
             d.Id,
             d.ApplicationId,
@@ -60,7 +60,7 @@ public static class DecisionRecordMapping
             d.DecidedAt,
             d.PlanRevision,
             d.Version,
-            DecisionMaker.RoleName(d.Role),
+            d.Role,
             CanonicalNumber.Normalize(d.Score),
             d.ProbabilityOfBad,
             d.Band,

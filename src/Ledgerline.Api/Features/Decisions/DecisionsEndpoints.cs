@@ -17,15 +17,6 @@ public static class DecisionsEndpoints
     /// <summary>1,000 applications of a few hundred characteristics each fit well within this.</summary>
     public const long BatchBodyLimitBytes = 16 * 1024 * 1024;
 
-    public static IServiceCollection AddDecisions(this IServiceCollection services)
-    {
-        services.AddSingleton<DecisionWriter>();
-        services.AddHostedService(sp => sp.GetRequiredService<DecisionWriter>());
-        services.AddSingleton<IValidator<DecisionRequest>, DecisionRequestValidator>();
-        services.AddSingleton<IValidator<DecisionBatchRequest>, DecisionBatchRequestValidator>();
-        return services;
-    }
-
     public static IEndpointRouteBuilder MapDecisions(this IEndpointRouteBuilder routes)
     {
         // Origination systems decide; they, risk managers and analysts read a logged decision.

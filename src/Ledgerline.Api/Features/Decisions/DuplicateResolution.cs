@@ -1,4 +1,5 @@
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Ledger;
 using Microsoft.EntityFrameworkCore;
 
 namespace Ledgerline.Api.Features.Decisions;

@@ -1,7 +1,7 @@
 using System.Security.Cryptography;
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Features.Access;
-using Ledgerline.Api.Features.Audit;
 using Microsoft.AspNetCore.Hosting.Server;
 using Microsoft.AspNetCore.Hosting.Server.Features;
 using Microsoft.EntityFrameworkCore;

@@ -16,7 +16,7 @@ public static class DemoRegistration
     /// listens. Call before the data registration: without a configured connection string the demo
     /// gets its own SQLite file, so it never mixes with real data.
     /// </summary>
-    public static IHostApplicationBuilder AddLedgerlineDemo(this IHostApplicationBuilder builder)
+    public static IHostApplicationBuilder AddDemo(this IHostApplicationBuilder builder)
     {
         builder.Services.AddOptions<DemoOptions>().BindConfiguration(DemoOptions.Section);
         var options = builder.Configuration.GetSection(DemoOptions.Section).Get<DemoOptions>() ?? new DemoOptions();

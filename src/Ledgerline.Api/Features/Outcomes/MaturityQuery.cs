@@ -1,7 +1,7 @@
 using Ledgerline.Api.Data;
-using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Scoring.Outcomes;
+using Ledgerline.Scoring.Scorecards;
 using Microsoft.EntityFrameworkCore;
 
 namespace Ledgerline.Api.Features.Outcomes;
@@ -25,12 +25,12 @@ internal static class MaturityQuery
                 g.Key.Version,
                 g.Key.Role,
                 Decided = g.Count(),
-                Approved = g.Count(d => d.Band == "approve"),
+                Approved = g.Count(d => d.Band == Band.Approve),
                 WithOutcome = g.Count(d => d.Outcome != null),
                 Matured = g.Count(d => d.Matured),
-                Bad = g.Count(d => d.Matured && d.Outcome == OutcomeClass.Bad),
-                Good = g.Count(d => d.Matured && d.Outcome == OutcomeClass.Good),
-                Indeterminate = g.Count(d => d.Matured && d.Outcome == OutcomeClass.Indeterminate),
+                Bad = g.Count(d => d.Matured && d.Outcome == PerformanceClass.Bad),
+                Good = g.Count(d => d.Matured && d.Outcome == PerformanceClass.Good),
+                Indeterminate = g.Count(d => d.Matured && d.Outcome == PerformanceClass.Indeterminate),
                 Overdue = g.Count(d => !d.Matured && d.ApplicationDate < openFrom),
                 NextApplicationDate = g.Where(d => !d.Matured && d.ApplicationDate >= openFrom).Min(d => (DateOnly?)d.ApplicationDate),
             })

@@ -1,4 +1,4 @@
-using Ledgerline.Api.Features.Decisions;
+using Ledgerline.Scoring.Engine;
 
 namespace Ledgerline.Api.Features.Outcomes;
 

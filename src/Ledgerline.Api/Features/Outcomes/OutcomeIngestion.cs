@@ -1,5 +1,6 @@
 using Ledgerline.Api.Data;
 using Ledgerline.Api.Features.Scorecards;
+using Ledgerline.Api.Ledger;
 using Ledgerline.Scoring.Outcomes;
 using Microsoft.EntityFrameworkCore;
 
@@ -81,13 +82,9 @@ internal sealed class OutcomeIngestion(
             return;
         }
 
-        if (db.Database.IsNpgsql())
-        {
-            // Another instance may post for the same accounts: lock the decisions so each
-            // recomputation sees every reading committed before it.
-            var locked = touched.Order().ToArray();
-            await db.Database.ExecuteSqlAsync($"SELECT 1 FROM \"Decisions\" WHERE \"Id\" = ANY({locked}) FOR UPDATE", ct);
-        }
+        // Another instance may post for the same accounts: lock the decisions so each
+        // recomputation sees every reading committed before it.
+        await StoreDialect.Of(db).LockRowsAsync<Decision>(db, touched, ct);
 
         // Only decisions that already have an outcome have earlier readings to load.
         var readings = new Dictionary<Guid, List<OutcomeReading>>(touched.Count);
@@ -99,7 +96,7 @@ internal sealed class OutcomeIngestion(
             .ToListAsync(ct);
         foreach (var o in earlier)
         {
-            ReadingsOf(readings, o.DecisionId).Add(new OutcomeReading(o.ObservedAt, o.WorstDaysPastDue, o.ChargedOff, OutcomeClassMapping.ParseStatus(o.Status)));
+            ReadingsOf(readings, o.DecisionId).Add(new OutcomeReading(o.ObservedAt, o.WorstDaysPastDue, o.ChargedOff, o.Status));
         }
 
         var applicationDates = new Dictionary<Guid, DateOnly>(touched.Count);
@@ -112,8 +109,8 @@ internal sealed class OutcomeIngestion(
                 ObservedAt = reading.ObservedAt,
                 WorstDaysPastDue = reading.WorstDaysPastDue,
                 ChargedOff = reading.ChargedOff,
-                Status = reading.Status is { } status ? OutcomeReadingCheck.Word(status) : null,
-                Classified = _rule.Classify(reading).ToStored(),
+                Status = reading.Status,
+                Classified = _rule.Classify(reading),
                 ReceivedAt = now,
             });
             ReadingsOf(readings, decision.Id).Add(reading);
@@ -126,7 +123,7 @@ internal sealed class OutcomeIngestion(
         foreach (var (id, applicationDate) in applicationDates.OrderBy(a => a.Key))
         {
             var current = OutcomeClassifier.Classify(_rule, applicationDate, readings[id])!.Value;
-            await store.UpdateDecisionAsync(id, current.Class.ToStored(), current.Matured, current.ObservedAt, ct);
+            await store.UpdateDecisionAsync(id, current.Class, current.Matured, current.ObservedAt, ct);
         }
     }
 

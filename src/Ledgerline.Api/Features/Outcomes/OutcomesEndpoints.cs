@@ -1,7 +1,7 @@
 using System.Security.Claims;
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Features.Access;
-using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Api.Http;
 using Microsoft.AspNetCore.Http.HttpResults;
@@ -20,8 +20,6 @@ public static class OutcomesEndpoints
 
     /// <summary>Rows checked and written per database round: big enough to amortise the queries, small enough to keep memory flat.</summary>
     internal const int ChunkRows = 2_000;
-
-    public static IServiceCollection AddOutcomes(this IServiceCollection services) => services;
 
     public static IEndpointRouteBuilder MapOutcomes(this IEndpointRouteBuilder routes)
     {

@@ -1,7 +1,5 @@
-using System.Globalization;
 using Ledgerline.Api.Data;
 using Ledgerline.Api.Features.Alerts;
-using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Api.Features.Overview.Charts;
 using Ledgerline.Api.Features.Reports;
 using Ledgerline.Api.Features.Scorecards;
@@ -38,7 +36,7 @@ public sealed class OverviewBuilder(LedgerlineDbContext db, ReportBuilder report
         return new OverviewData(
             scorecard.Key, scorecard.Name, DateOnly.FromDateTime(clock.GetUtcNow().UtcDateTime), scorecard.PerformanceWindowMonths,
             shown, performance, comparison, stability, alerts.Select(a => a.ToResponse()).ToList(),
-            await CohortsAsync(scorecard.Id, query, ct), baselineShares);
+            await reports.CohortsAsync(scorecard, query, ct), baselineShares);
     }
 
     /// <summary>The versions of the current plan in plan order; without a plan, every version that scored anything.</summary>
@@ -63,33 +61,5 @@ public sealed class OverviewBuilder(LedgerlineDbContext db, ReportBuilder report
             var histogram = PerformanceCalculator.Histogram(cells.Where(c => c.Version == r.Version && c.InPerformance).Select(c => (c.Score, c.Outcome, c.Count)));
             return new ShownVersion(r.Version, r.Role, r.Share, ChartPalette.ForIndex(i), Roc.Compute(histogram), KolmogorovSmirnov.Compute(histogram));
         }).ToList();
-    }
-
-    private async Task<List<CohortMaturity>> CohortsAsync(long scorecardId, ReportQuery query, CancellationToken ct)
-    {
-        var decisions = db.Decisions.Where(d => d.ScorecardId == scorecardId);
-        if (query.From is { } from)
-        {
-            decisions = decisions.Where(d => d.ApplicationDate >= from);
-        }
-
-        if (query.To is { } to)
-        {
-            decisions = decisions.Where(d => d.ApplicationDate <= to);
-        }
-
-        var days = await decisions
-            .GroupBy(d => new { d.ApplicationDate, Approved = d.Band == "approve", d.Matured, d.Outcome })
-            .Select(g => new { g.Key.ApplicationDate, g.Key.Approved, g.Key.Matured, g.Key.Outcome, Count = g.LongCount() })
-            .ToListAsync(ct);
-        return days.GroupBy(d => d.ApplicationDate.ToString("yyyy-MM", CultureInfo.InvariantCulture)).OrderBy(g => g.Key, StringComparer.Ordinal)
-            .Select(g => new CohortMaturity(
-                g.Key,
-                g.Where(d => !d.Approved).Sum(d => d.Count),
-                g.Where(d => d.Approved && d.Matured && d.Outcome == OutcomeClass.Good).Sum(d => d.Count),
-                g.Where(d => d.Approved && d.Matured && d.Outcome == OutcomeClass.Bad).Sum(d => d.Count),
-                g.Where(d => d.Approved && d.Matured && d.Outcome == OutcomeClass.Indeterminate).Sum(d => d.Count),
-                g.Where(d => d.Approved && !d.Matured).Sum(d => d.Count)))
-            .ToList();
     }
 }

@@ -1,5 +1,6 @@
 using Ledgerline.Api.Features.Overview.Charts;
 using Ledgerline.Api.Features.Reports;
+using Ledgerline.Scoring.Scorecards;
 
 namespace Ledgerline.Api.Features.Overview;
 
@@ -174,23 +175,23 @@ public static class OverviewCharts
 
     public static IEnumerable<ChartSection> SwapSets(OverviewData data)
     {
-        string[] bands = ["approve", "refer", "decline"];
+        Band[] bands = [Band.Approve, Band.Refer, Band.Decline];
         string[] colours = [ChartPalette.Good, ChartPalette.AmberBand, ChartPalette.Bad];
         foreach (var challenger in data.Comparison.Challengers)
         {
             var cells = challenger.SwapSet;
-            var series = bands.Select((b, i) => new BarSeries($"v{challenger.Version} {b}s",
+            var series = bands.Select((b, i) => new BarSeries($"v{challenger.Version} {BandNames.ToWire(b)}s",
                 bands.Select(c => (double?)cells.Where(x => x.Champion == c && x.Challenger == b).Sum(x => x.Count)).ToList(), colours[i])).ToList();
             var top = bands.Select(c => cells.Where(x => x.Champion == c).Sum(x => x.Count)).DefaultIfEmpty(1).Max();
             var (_, max) = Charts.LinearScale.NiceDomain(0, Math.Max(1, top), 5);
             var champion = data.Comparison.Champion?.Version;
             var chart = new BarChart($"swap-v{challenger.Version}", $"Swap set: champion v{champion}'s decision, split by challenger v{challenger.Version}'s",
-                $"Champion v{champion}'s decision", bands, new ChartAxis("Applications", 0, max, v => Figures.Count((long)v)), series)
+                $"Champion v{champion}'s decision", bands.Select(BandNames.ToWire).ToList(), new ChartAxis("Applications", 0, max, v => Figures.Count((long)v)), series)
             { Stacked = true };
             var table = new HtmlTable($"Swap set, champion v{champion} against challenger v{challenger.Version}", "Champion", "Challenger", "Applications", "Matured", "Bads", "Bad rate");
             foreach (var cell in cells)
             {
-                table.Row(cell.Champion, cell.Challenger, Figures.Count(cell.Count), Figures.Count(cell.Matured), Figures.Count(cell.Bads), Figures.Percent(cell.BadRate, 2));
+                table.Row(BandNames.ToWire(cell.Champion), BandNames.ToWire(cell.Challenger), Figures.Count(cell.Count), Figures.Count(cell.Matured), Figures.Count(cell.Bads), Figures.Percent(cell.BadRate, 2));
             }
 
             var observed = string.Join(" ", cells.Select(c => c.Observed).Distinct(StringComparer.Ordinal));

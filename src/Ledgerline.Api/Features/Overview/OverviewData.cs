@@ -23,9 +23,3 @@ public sealed record ShownVersion(int Number, string Role, double? Share, string
 {
     public string Label => $"v{Number} {Role}";
 }
-
-/// <summary>Applications of one month by where their outcome stands.</summary>
-public sealed record CohortMaturity(string Month, long NotApproved, long MaturedGood, long MaturedBad, long MaturedIndeterminate, long Immature)
-{
-    public long Total => NotApproved + MaturedGood + MaturedBad + MaturedIndeterminate + Immature;
-}

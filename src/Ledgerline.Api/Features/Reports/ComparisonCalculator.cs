@@ -1,10 +1,9 @@
-using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Api.Features.Traffic;
 using Ledgerline.Scoring.Engine;
 using Ledgerline.Scoring.Monitoring;
+using Ledgerline.Scoring.Outcomes;
 using Ledgerline.Scoring.Scorecards;
 using Ledgerline.Scoring.Statistics;
-using BandDecision = Ledgerline.Scoring.Scorecards.Decision;
 
 namespace Ledgerline.Api.Features.Reports;
 
@@ -39,7 +38,7 @@ public static class ComparisonCalculator
         var roc = Roc.Compute(histogram);
         return new ArmFigures(decisions, approved, decisions > 0 ? (double)approved / decisions : null, histogram.Total, histogram.TotalBads,
             histogram.Total > 0 ? (double)histogram.TotalBads / histogram.Total : null, roc.Auc,
-            ArmPopulation(version, PerformanceCalculator.RoleWord(role), range) + "; bad rate and AUC over those approved with matured good or bad outcomes");
+            ArmPopulation(version, ArmRoleNames.ToWire(role), range) + "; bad rate and AUC over those approved with matured good or bad outcomes");
     }
 
     public static ScoreHistogram ArmHistogram(IEnumerable<ArmCell> cells) =>
@@ -60,7 +59,7 @@ public static class ComparisonCalculator
         var pairedPopulation = PairedPopulation(champion, challenger, range);
         var (challengerHistogram, _) = Marginals(pairs);
         var paired = DeLong.PairedTest(pairs.Where(p => p.InPerformance).Select(p =>
-            new PairedScoreCount((double)p.ScoreA, (double)p.ScoreB, p.Outcome == OutcomeClass.Bad ? 0 : p.Count, p.Outcome == OutcomeClass.Bad ? p.Count : 0)));
+            new PairedScoreCount((double)p.ScoreA, (double)p.ScoreB, p.Outcome == PerformanceClass.Bad ? 0 : p.Count, p.Outcome == PerformanceClass.Bad ? p.Count : 0)));
 
         var championArmCells = arms.Where(a => a.Version == champion && a.Role == ArmRole.Champion).ToList();
         var challengerArmCells = arms.Where(a => a.Version == challenger && a.Role == ArmRole.Challenger).ToList();
@@ -95,21 +94,21 @@ public static class ComparisonCalculator
 
     private static List<SwapCell> SwapSet(IReadOnlyList<PairCell> pairs, CompiledScorecard champion, CompiledScorecard challenger)
     {
-        var cells = new Dictionary<(BandDecision Champion, BandDecision Challenger), (long Count, long Matured, long Bads)>();
+        var cells = new Dictionary<(Band Champion, Band Challenger), (long Count, long Matured, long Bads)>();
         foreach (var pair in pairs)
         {
-            var key = (champion.DecisionFor(pair.ScoreB), challenger.DecisionFor(pair.ScoreA));
+            var key = (champion.BandFor(pair.ScoreB), challenger.BandFor(pair.ScoreA));
             cells.TryGetValue(key, out var sum);
             var matured = pair.InPerformance ? pair.Count : 0;
-            var bads = pair.InPerformance && pair.Outcome == OutcomeClass.Bad ? pair.Count : 0;
+            var bads = pair.InPerformance && pair.Outcome == PerformanceClass.Bad ? pair.Count : 0;
             cells[key] = (sum.Count + pair.Count, sum.Matured + matured, sum.Bads + bads);
         }
 
-        var order = new[] { BandDecision.Approve, BandDecision.Refer, BandDecision.Decline };
+        var order = new[] { Band.Approve, Band.Refer, Band.Decline };
         return (from a in order
                 from b in order
                 let sum = cells.GetValueOrDefault((a, b))
-                select new SwapCell(DecisionNames.ToWire(a), DecisionNames.ToWire(b), sum.Count, sum.Matured, sum.Bads,
+                select new SwapCell(a, b, sum.Count, sum.Matured, sum.Bads,
                     sum.Matured > 0 ? (double)sum.Bads / sum.Matured : null,
                     "observed: outcomes exist only where the deciding version approved, so a swap-in declined by its decider has none"))
             .ToList();
@@ -156,12 +155,12 @@ public static class ComparisonCalculator
             }
 
             var challengers = revision.ChallengerShares();
-            var planned = new List<(int Version, string Role, double Share)>
+            var planned = new List<(int Version, ArmRole Role, double Share)>
             {
-                (revision.ChampionVersion, "champion", 1 - (double)challengers.Sum(c => c.Share)),
+                (revision.ChampionVersion, ArmRole.Champion, 1 - (double)challengers.Sum(c => c.Share)),
             };
-            planned.AddRange(challengers.Select(c => (c.Version, "challenger", (double)c.Share)));
-            var observed = planned.Select(p => decided.Where(a => a.Version == p.Version && PerformanceCalculator.RoleWord(a.Role) == p.Role).Sum(a => a.Count)).ToList();
+            planned.AddRange(challengers.Select(c => (c.Version, ArmRole.Challenger, (double)c.Share)));
+            var observed = planned.Select(p => decided.Where(a => a.Version == p.Version && a.Role == p.Role).Sum(a => a.Count)).ToList();
             var total = observed.Sum();
             var shares = planned.Select((p, i) => new ArmShare(p.Version, p.Role, p.Share, observed[i], total > 0 ? (double)observed[i] / total : null)).ToList();
             if (planned.Count < 2)

@@ -1,6 +1,6 @@
-using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Scoring.Engine;
 using Ledgerline.Scoring.Monitoring;
+using Ledgerline.Scoring.Outcomes;
 using Ledgerline.Scoring.Scorecards;
 using Ledgerline.Scoring.Statistics;
 
@@ -24,7 +24,7 @@ public static class PerformanceCalculator
         var decisions = cells.Sum(c => c.Count);
         var approved = cells.Where(c => c.Approved).Sum(c => c.Count);
         var performance = cells.Where(c => c.InPerformance).ToList();
-        var indeterminate = cells.Where(c => c.Approved && c.Matured && c.Outcome == OutcomeClass.Indeterminate).Sum(c => c.Count);
+        var indeterminate = cells.Where(c => c.Approved && c.Matured && c.Outcome == PerformanceClass.Indeterminate).Sum(c => c.Count);
         var immature = cells.Where(c => c.Approved && !c.Matured).Sum(c => c.Count);
         var histogram = Histogram(performance.Select(c => (c.Score, c.Outcome, c.Count)));
         var roc = Roc.Compute(histogram);
@@ -46,8 +46,8 @@ public static class PerformanceCalculator
         }
 
         var roles = cells.GroupBy(c => (c.Role, c.Deciding))
-            .Select(g => new RoleVolume(RoleWord(g.Key.Role), g.Key.Deciding, g.Sum(c => c.Count)))
-            .OrderByDescending(r => r.Deciding).ThenBy(r => r.Role, StringComparer.Ordinal).ToList();
+            .Select(g => new RoleVolume(g.Key.Role, g.Key.Deciding, g.Sum(c => c.Count)))
+            .OrderByDescending(r => r.Deciding).ThenBy(r => ArmRoleNames.ToWire(r.Role), StringComparer.Ordinal).ToList();
 
         var (cutPoints, binsText) = ScoreBinsFor(baseline, cells);
         var distribution = Distribution(cells, cutPoints);
@@ -67,21 +67,14 @@ public static class PerformanceCalculator
             RankOrderingOf(calibration), Development(baseline, roc), unavailable);
     }
 
-    public static ScoreHistogram Histogram(IEnumerable<(decimal Score, OutcomeClass? Outcome, long Count)> cells) =>
-        new(cells.Select(c => c.Outcome == OutcomeClass.Bad ? new ScoreCount((double)c.Score, 0, c.Count) : new ScoreCount((double)c.Score, c.Count, 0)));
-
-    public static string RoleWord(ArmRole role) => role switch
-    {
-        ArmRole.Champion => "champion",
-        ArmRole.Challenger => "challenger",
-        _ => "shadow",
-    };
+    public static ScoreHistogram Histogram(IEnumerable<(decimal Score, PerformanceClass? Outcome, long Count)> cells) =>
+        new(cells.Select(c => c.Outcome == PerformanceClass.Bad ? new ScoreCount((double)c.Score, 0, c.Count) : new ScoreCount((double)c.Score, c.Count, 0)));
 
     private static BandRates OwnBands(IReadOnlyList<ScoreCell> cells, int version, string range)
     {
         var total = cells.Sum(c => c.Count);
-        double? Share(string band) => total > 0 ? (double)cells.Where(c => c.Band == band).Sum(c => c.Count) / total : null;
-        return new BandRates(Share("approve"), Share("refer"), Share("decline"),
+        double? Share(Band band) => total > 0 ? (double)cells.Where(c => c.Band == band).Sum(c => c.Count) / total : null;
+        return new BandRates(Share(Band.Approve), Share(Band.Refer), Share(Band.Decline),
             $"all applications scored by version {version}, by its own decision bands (what it decided or would have decided); {range}");
     }
 

@@ -1,7 +1,8 @@
-using System.Data;
 using Ledgerline.Api.Data;
-using Ledgerline.Api.Features.Decisions;
-using Microsoft.Data.Sqlite;
+using Ledgerline.Api.Ledger;
+using Ledgerline.Scoring.Engine;
+using Ledgerline.Scoring.Outcomes;
+using Ledgerline.Scoring.Scorecards;
 using Microsoft.EntityFrameworkCore;
 
 namespace Ledgerline.Api.Features.Reports;
@@ -31,7 +32,7 @@ public static class ReportAggregates
             scores.Where(s => s.Matured)
                 .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
                 .Select(g => new IndexCell(g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, 0, null, g.LongCount())),
-            c => (c.Version, c.Role, c.Deciding, Score: c.Score!.Value, c.Band, Approved: c.DecisionBand == ApproveWord),
+            c => (c.Version, c.Role, c.Deciding, Score: c.Score!.Value, c.Band, Approved: c.DecisionBand == Band.Approve),
             ct);
         return cells.Select(c => new ScoreCell(c.Key.Version, c.Key.Role, c.Key.Deciding, c.Key.Score, c.Key.Band, c.Key.Approved, c.Matured, c.Outcome, c.Count)).ToList();
     }
@@ -47,7 +48,7 @@ public static class ReportAggregates
             deciding.Where(s => s.Matured)
                 .GroupBy(s => new { s.Version, s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome })
                 .Select(g => new IndexCell(g.Key.Version, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, 0, null, g.LongCount())),
-            c => (c.Version, c.Role, c.PlanRevision, Approved: c.DecisionBand == ApproveWord, Score: c.Score!.Value),
+            c => (c.Version, c.Role, c.PlanRevision, Approved: c.DecisionBand == Band.Approve, Score: c.Score!.Value),
             ct);
         return cells.Select(c => new ArmCell(c.Key.Version, c.Key.Role, c.Key.PlanRevision, c.Key.Approved, c.Matured, c.Outcome, c.Key.Score, c.Count)).ToList();
     }
@@ -69,11 +70,19 @@ public static class ReportAggregates
             scores.Where(s => s.Matured)
                 .GroupBy(s => new { s.Deciding, s.Role, s.PlanRevision, s.Score, s.Band, s.DecisionBand, s.Outcome, s.ChampionVersion, s.ChampionScore })
                 .Select(g => new IndexCell(versionA, g.Key.Deciding, g.Key.Role, g.Key.PlanRevision, g.Key.Score, g.Key.Band, g.Key.DecisionBand, g.Key.Outcome, g.Key.ChampionVersion, g.Key.ChampionScore, g.LongCount())),
-            c => (Score: c.Score!.Value, ChampionScore: c.ChampionScore!.Value, Approved: c.DecisionBand == ApproveWord, c.ChampionVersion),
+            c => (Score: c.Score!.Value, ChampionScore: c.ChampionScore!.Value, Approved: c.DecisionBand == Band.Approve, c.ChampionVersion),
             ct);
         return cells.Where(c => c.Key.ChampionVersion == championB)
             .Select(c => new PairCell(c.Key.Score, c.Key.ChampionScore, c.Key.Approved, c.Matured, c.Outcome, c.Count)).ToList();
     }
+
+    /// <summary>Decisions per application date, by whether the decider approved and where the outcome stands.</summary>
+    public static Task<List<DecidedCell>> DecidedAsync(LedgerlineDbContext db, long scorecardId, ReportQuery query, CancellationToken ct) =>
+        InRange(db.DecisionScores, scorecardId, query)
+            .Where(s => s.Deciding)
+            .GroupBy(s => new { s.ApplicationDate, Approved = s.DecisionBand == Band.Approve, s.Matured, s.Outcome })
+            .Select(g => new DecidedCell(g.Key.ApplicationDate, g.Key.Approved, g.Key.Matured, g.Key.Outcome, g.LongCount()))
+            .ToListAsync(ct);
 
     /// <summary>One version's scores per application date (for the population stability index).</summary>
     public static Task<List<DailyScoreCell>> DailyScoresAsync(LedgerlineDbContext db, long scorecardId, int version, ReportQuery query, CancellationToken ct) =>
@@ -85,31 +94,28 @@ public static class ReportAggregates
 
     /// <summary>
     /// One version's matched bins, one row per score in the range, streamed (for the characteristic
-    /// stability indexes). No index holds the bins, so on SQLite the table is read straight through:
-    /// looking each row up from the report index, in score order, took ten times as long on a
-    /// million decisions (4.0 against 0.4 s), and grouping the bin strings in SQL sorted them all.
+    /// stability indexes). No index holds the bins, so the table is read in its own order; grouping
+    /// the bin strings in SQL sorted them all.
     /// </summary>
     public static IAsyncEnumerable<DailyBins> DailyBinsAsync(LedgerlineDbContext db, long scorecardId, int version, ReportQuery query)
     {
-        var table = db.Database.IsSqlite() ? db.DecisionScores.FromSqlRaw("SELECT * FROM \"DecisionScores\" NOT INDEXED") : db.DecisionScores;
-        return InRange(table, scorecardId, query)
+        return InRange(StoreDialect.Of(db).InStorageOrder<DecisionScore>(db), scorecardId, query)
             .Where(s => s.Version == version && s.MatchedBins != null)
             .Select(s => new DailyBins(s.ApplicationDate, s.MatchedBins!))
             .AsAsyncEnumerable();
     }
-
-    private const string ApproveWord = "approve";
 
     /// <summary>
     /// Streams the cells of every score (grouped along the first report index) and the matured
     /// cells with their outcome (along the matured-only index) into one list, per report key:
     /// each matured outcome, and the rest as immature.
     /// </summary>
-    private static async Task<List<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)>> SplitAsync<TKey>(
+    private static async Task<List<(TKey Key, bool Matured, PerformanceClass? Outcome, long Count)>> SplitAsync<TKey>(
         LedgerlineDbContext db, IQueryable<IndexCell> all, IQueryable<IndexCell> matured, Func<IndexCell, TKey> keyOf, CancellationToken ct)
         where TKey : notnull
     {
-        await using var snapshot = await SnapshotAsync(db, ct);
+        // One snapshot for both queries, so a decision that matures between them is not counted twice.
+        await using var snapshot = await StoreDialect.Of(db).BeginReadSnapshotAsync(db, ct);
         var immature = new Dictionary<TKey, long>();
         await foreach (var cell in all.AsAsyncEnumerable().WithCancellation(ct))
         {
@@ -117,7 +123,7 @@ public static class ReportAggregates
             immature[key] = immature.GetValueOrDefault(key) + cell.Count;
         }
 
-        var outcomes = new Dictionary<(TKey Key, OutcomeClass? Outcome), long>();
+        var outcomes = new Dictionary<(TKey Key, PerformanceClass? Outcome), long>();
         await foreach (var cell in matured.AsAsyncEnumerable().WithCancellation(ct))
         {
             var key = keyOf(cell);
@@ -125,58 +131,16 @@ public static class ReportAggregates
             immature[key] = immature.GetValueOrDefault(key) - cell.Count;
         }
 
-        var cells = new List<(TKey Key, bool Matured, OutcomeClass? Outcome, long Count)>(outcomes.Count + immature.Count);
+        var cells = new List<(TKey Key, bool Matured, PerformanceClass? Outcome, long Count)>(outcomes.Count + immature.Count);
         cells.AddRange(outcomes.Select(o => (o.Key.Key, true, o.Key.Outcome, o.Value)));
-        cells.AddRange(immature.Where(i => i.Value > 0).Select(i => (i.Key, false, (OutcomeClass?)null, i.Value)));
+        cells.AddRange(immature.Where(i => i.Value > 0).Select(i => (i.Key, false, (PerformanceClass?)null, i.Value)));
         return cells;
     }
 
     /// <summary>One group read from a report index; columns a query does not group by hold defaults.</summary>
     private sealed record IndexCell(
-        int Version, bool Deciding, ArmRole Role, int PlanRevision, decimal? Score, string? Band, string DecisionBand,
-        OutcomeClass? Outcome, int ChampionVersion, decimal? ChampionScore, long Count);
-
-    /// <summary>
-    /// One snapshot for the two queries of a split, so a decision that matures between them is
-    /// not counted twice; none when the caller already holds a transaction.
-    /// </summary>
-    private static async Task<IAsyncDisposable> SnapshotAsync(LedgerlineDbContext db, CancellationToken ct)
-    {
-        if (db.Database.CurrentTransaction is not null)
-        {
-            return NoSnapshot.Instance;
-        }
-
-        if (!db.Database.IsSqlite())
-        {
-            return await db.Database.BeginTransactionAsync(IsolationLevel.RepeatableRead, ct);
-        }
-
-        // Deferred: SQLite's default transaction takes the write lock at once, which would hold
-        // up the decision log for as long as the report reads. A deferred one only reads, from
-        // the snapshot its first query sees.
-        await db.Database.OpenConnectionAsync(ct);
-        var transaction = ((SqliteConnection)db.Database.GetDbConnection()).BeginTransaction(deferred: true);
-        await db.Database.UseTransactionAsync(transaction, ct);
-        return new SqliteSnapshot(db, transaction);
-    }
-
-    private sealed class SqliteSnapshot(LedgerlineDbContext db, SqliteTransaction transaction) : IAsyncDisposable
-    {
-        public async ValueTask DisposeAsync()
-        {
-            await db.Database.UseTransactionAsync(null);
-            await transaction.DisposeAsync();
-            await db.Database.CloseConnectionAsync();
-        }
-    }
-
-    private sealed class NoSnapshot : IAsyncDisposable
-    {
-        public static readonly NoSnapshot Instance = new();
-
-        public ValueTask DisposeAsync() => ValueTask.CompletedTask;
-    }
+        int Version, bool Deciding, ArmRole Role, int PlanRevision, decimal? Score, Band? Band, Band DecisionBand,
+        PerformanceClass? Outcome, int ChampionVersion, decimal? ChampionScore, long Count);
 
     private static IQueryable<DecisionScore> InRange(IQueryable<DecisionScore> table, long scorecardId, ReportQuery query)
     {
@@ -196,23 +160,26 @@ public static class ReportAggregates
 }
 
 /// <summary>Applications one version scored with one score, by role and by what happened to them.</summary>
-public sealed record ScoreCell(int Version, ArmRole Role, bool Deciding, decimal Score, string? Band, bool Approved, bool Matured, OutcomeClass? Outcome, long Count)
+public sealed record ScoreCell(int Version, ArmRole Role, bool Deciding, decimal Score, Band? Band, bool Approved, bool Matured, PerformanceClass? Outcome, long Count)
 {
     /// <summary>True when the cell counts towards performance figures: approved by the decider, matured, good or bad.</summary>
-    public bool InPerformance => Approved && Matured && Outcome is OutcomeClass.Good or OutcomeClass.Bad;
+    public bool InPerformance => Approved && Matured && Outcome is PerformanceClass.Good or PerformanceClass.Bad;
 }
 
 /// <summary>Decisions of one deciding arm with one score and outcome.</summary>
-public sealed record ArmCell(int Version, ArmRole Role, int PlanRevision, bool Approved, bool Matured, OutcomeClass? Outcome, decimal Score, long Count)
+public sealed record ArmCell(int Version, ArmRole Role, int PlanRevision, bool Approved, bool Matured, PerformanceClass? Outcome, decimal Score, long Count)
 {
-    public bool InPerformance => Approved && Matured && Outcome is OutcomeClass.Good or OutcomeClass.Bad;
+    public bool InPerformance => Approved && Matured && Outcome is PerformanceClass.Good or PerformanceClass.Bad;
 }
 
 /// <summary>Applications scored by both versions of a pair, per score pair and outcome.</summary>
-public sealed record PairCell(decimal ScoreA, decimal ScoreB, bool Approved, bool Matured, OutcomeClass? Outcome, long Count)
+public sealed record PairCell(decimal ScoreA, decimal ScoreB, bool Approved, bool Matured, PerformanceClass? Outcome, long Count)
 {
-    public bool InPerformance => Approved && Matured && Outcome is OutcomeClass.Good or OutcomeClass.Bad;
+    public bool InPerformance => Approved && Matured && Outcome is PerformanceClass.Good or PerformanceClass.Bad;
 }
+
+/// <summary>Decisions of one application date by what the decider answered and where the outcome stands.</summary>
+public sealed record DecidedCell(DateOnly Date, bool Approved, bool Matured, PerformanceClass? Outcome, long Count);
 
 /// <summary>Applications of one date with one score.</summary>
 public sealed record DailyScoreCell(DateOnly Date, decimal Score, long Count);

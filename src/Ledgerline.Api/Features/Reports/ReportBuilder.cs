@@ -1,8 +1,8 @@
+using System.Globalization;
 using Ledgerline.Api.Data;
-using Ledgerline.Api.Features.Alerts;
-using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Scoring.Engine;
+using Ledgerline.Scoring.Outcomes;
 using Ledgerline.Scoring.Scorecards;
 using Microsoft.EntityFrameworkCore;
 
@@ -21,8 +21,8 @@ public sealed class ReportBuilder(LedgerlineDbContext db, VersionCache cache)
             v.Baseline is { } b ? BaselineEndpoints.Parse(b.Aggregates) : null));
     }
 
-    public async Task<AlertThresholds> ThresholdsAsync(long scorecardId, CancellationToken ct) =>
-        await db.AlertThresholds.AsNoTracking().FirstOrDefaultAsync(t => t.ScorecardId == scorecardId, ct) ?? AlertThresholds.Defaults(scorecardId);
+    public async Task<MonitoringThresholds> ThresholdsAsync(long scorecardId, CancellationToken ct) =>
+        await db.MonitoringThresholds.AsNoTracking().FirstOrDefaultAsync(t => t.ScorecardId == scorecardId, ct) ?? MonitoringThresholds.Defaults(scorecardId);
 
     public async Task<PerformanceReport> PerformanceAsync(Scorecard scorecard, IReadOnlyDictionary<int, ReportVersion> versions, ReportQuery query, CancellationToken ct)
     {
@@ -88,6 +88,21 @@ public sealed class ReportBuilder(LedgerlineDbContext db, VersionCache cache)
 
         return new ComparisonReport(scorecard.Key, query.RangeText, championFigures, comparisons, ComparisonCalculator.SampleRatio(arms, revisions),
             challengers.Count == 0 ? "The champion had no challenger in the range." : null);
+    }
+
+    /// <summary>Decisions per application month by where their outcome stands.</summary>
+    public async Task<List<CohortMaturity>> CohortsAsync(Scorecard scorecard, ReportQuery query, CancellationToken ct)
+    {
+        var days = await ReportAggregates.DecidedAsync(db, scorecard.Id, query, ct);
+        return days.GroupBy(d => d.Date.ToString("yyyy-MM", CultureInfo.InvariantCulture)).OrderBy(g => g.Key, StringComparer.Ordinal)
+            .Select(g => new CohortMaturity(
+                g.Key,
+                g.Where(d => !d.Approved).Sum(d => d.Count),
+                g.Where(d => d.Approved && d.Matured && d.Outcome == PerformanceClass.Good).Sum(d => d.Count),
+                g.Where(d => d.Approved && d.Matured && d.Outcome == PerformanceClass.Bad).Sum(d => d.Count),
+                g.Where(d => d.Approved && d.Matured && d.Outcome == PerformanceClass.Indeterminate).Sum(d => d.Count),
+                g.Where(d => d.Approved && !d.Matured).Sum(d => d.Count)))
+            .ToList();
     }
 
     public async Task<StabilityReport> StabilityAsync(Scorecard scorecard, ReportVersion version, ReportQuery query, CancellationToken ct)

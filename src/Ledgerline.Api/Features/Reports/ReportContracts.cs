@@ -1,5 +1,7 @@
 using System.Text.Json.Serialization;
+using Ledgerline.Scoring.Engine;
 using Ledgerline.Scoring.Monitoring;
+using Ledgerline.Scoring.Scorecards;
 using Ledgerline.Scoring.Statistics;
 
 namespace Ledgerline.Api.Features.Reports;
@@ -38,7 +40,7 @@ public sealed record VersionPerformance(
     IReadOnlyDictionary<string, string> Unavailable);
 
 /// <summary>Applications a version scored in one role; deciding tells whether its band was the decision.</summary>
-public sealed record RoleVolume(string Role, bool Deciding, long Decisions);
+public sealed record RoleVolume(ArmRole Role, bool Deciding, long Decisions);
 
 /// <summary>Shares of applications by the version's own band (what it decided or would have decided).</summary>
 public sealed record BandRates(double? Approve, double? Refer, double? Decline, string Population);
@@ -156,7 +158,7 @@ public sealed record ProportionDifference(
     string? Reason);
 
 /// <summary>Applications by the champion's band and the challenger's band, with observed bad rates where outcomes exist.</summary>
-public sealed record SwapCell(string Champion, string Challenger, long Count, long Matured, long Bads, double? BadRate, string Observed);
+public sealed record SwapCell(Band Champion, Band Challenger, long Count, long Matured, long Bads, double? BadRate, string Observed);
 
 public sealed record PowerFigure(
     long? MaturedNeededPerArmForAuc,
@@ -174,7 +176,7 @@ public sealed record SampleRatioCheck(
     [property: JsonIgnore(Condition = JsonIgnoreCondition.Never)] double? PValue,
     string? Reason);
 
-public sealed record ArmShare(int Version, string Role, double PlannedShare, long Decisions, double? RealisedShare);
+public sealed record ArmShare(int Version, ArmRole Role, double PlannedShare, long Decisions, double? RealisedShare);
 
 public sealed record StabilityReport(
     string Scorecard,
@@ -205,3 +207,9 @@ public sealed record CharacteristicStability(
     double? MissingShare,
     double? DevelopmentMissingShare,
     string? Reason);
+
+/// <summary>Applications of one month by where their outcome stands.</summary>
+public sealed record CohortMaturity(string Month, long NotApproved, long MaturedGood, long MaturedBad, long MaturedIndeterminate, long Immature)
+{
+    public long Total => NotApproved + MaturedGood + MaturedBad + MaturedIndeterminate + Immature;
+}

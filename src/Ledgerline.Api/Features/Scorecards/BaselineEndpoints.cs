@@ -1,8 +1,8 @@
 using System.Security.Claims;
 using System.Text.Json;
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Features.Access;
-using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Http;
 using Ledgerline.Scoring.Engine;
 using Ledgerline.Scoring.Scorecards;

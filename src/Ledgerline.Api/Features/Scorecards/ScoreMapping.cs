@@ -10,7 +10,7 @@ public static class ScoreMapping
         version,
         CanonicalNumber.Normalize(result.Score),
         result.ProbabilityOfBad,
-        DecisionNames.ToWire(result.Decision),
+        result.Band,
         ToResponse(result.ReasonCodes),
         Characteristics(compiled, result.MatchedBins, result.Points));
 

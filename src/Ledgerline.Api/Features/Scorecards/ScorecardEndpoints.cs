@@ -1,7 +1,7 @@
 using System.Security.Claims;
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Features.Access;
-using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Http;
 using Microsoft.AspNetCore.Http.HttpResults;
 using Microsoft.EntityFrameworkCore;

@@ -13,7 +13,4 @@ public static class ScorecardRegistration
         services.AddSingleton<IValidator<BaselineRequest>, BaselineRequestValidator>();
         return services;
     }
-
-    public static IEndpointRouteBuilder MapScorecardRegistry(this IEndpointRouteBuilder routes) =>
-        routes.MapScorecards().MapVersions().MapBaselines();
 }

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using Ledgerline.Scoring.Scorecards;
 
 namespace Ledgerline.Api.Features.Scorecards;
 
@@ -55,7 +56,7 @@ public sealed record ScoreResponse(
     int Version,
     decimal Score,
     double ProbabilityOfBad,
-    string Decision,
+    Band Decision,
     IReadOnlyList<ReasonCodeResponse> ReasonCodes,
     IReadOnlyList<CharacteristicScore> Characteristics);
 

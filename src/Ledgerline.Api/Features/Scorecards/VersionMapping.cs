@@ -23,7 +23,7 @@ public static class VersionMapping
             c.Bins!.Select(b => new BinDefinition(b.From, b.UpTo, b.Values, b.Points!.Value)).ToList(),
             c.MissingPoints,
             c.OtherPoints)).ToList(),
-        r.DecisionBands!.Select(b => new DecisionBand(b.MinScore, DecisionNames.TryParse(b.Decision, out var d) ? d : default)).ToList());
+        r.DecisionBands!.Select(b => new DecisionBand(b.MinScore, BandNames.TryParse(b.Decision, out var d) ? d : default)).ToList());
 
     /// <summary>The model as a wire document (what GET answers).</summary>
     public static RegisterVersionRequest ToDocument(this ScorecardDefinition d) => new(
@@ -39,7 +39,7 @@ public static class VersionMapping
             c.Bins.Select(b => new BinDocument(b.From, b.UpTo, b.Values, b.Points)).ToList(),
             c.MissingPoints,
             c.OtherPoints)).ToList(),
-        d.DecisionBands.Select(b => new DecisionBandDocument(b.MinScore, DecisionNames.ToWire(b.Decision))).ToList());
+        d.DecisionBands.Select(b => new DecisionBandDocument(b.MinScore, BandNames.ToWire(b.Band))).ToList());
 
     /// <summary>Reads a stored canonical points table back into the model.</summary>
     public static ScorecardDefinition ParseStored(string canonicalJson) =>

@@ -37,7 +37,7 @@ internal sealed class RegisterVersionRequestValidator : AbstractValidator<Regist
             });
         });
         RuleForEach(r => r.DecisionBands).ChildRules(b =>
-            b.RuleFor(x => x.Decision).Must(d => DecisionNames.TryParse(d, out _)).WithMessage("must be 'approve', 'refer' or 'decline'"));
+            b.RuleFor(x => x.Decision).Must(d => BandNames.TryParse(d, out _)).WithMessage("must be 'approve', 'refer' or 'decline'"));
         RuleFor(r => r).Custom((request, context) =>
         {
             foreach (var problem in ScorecardValidator.Validate(request.ToDefinition()))
@@ -53,7 +53,7 @@ internal sealed class RegisterVersionRequestValidator : AbstractValidator<Regist
         && r.DecisionBands is { Count: > 0 }
         && r.Characteristics.All(c => c is { Name.Length: > 0, Type: "numeric" or "categorical", ReasonCode.Length: > 0, ReasonText.Length: > 0, Bins.Count: > 0 }
             && c.Bins.All(b => b?.Points is not null))
-        && r.DecisionBands.All(b => DecisionNames.TryParse(b.Decision, out _));
+        && r.DecisionBands.All(b => BandNames.TryParse(b.Decision, out _));
 }
 
 internal sealed class CreateScorecardRequestValidator : AbstractValidator<CreateScorecardRequest>

@@ -1,4 +1,3 @@
-using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Scoring.Engine;
 
 namespace Ledgerline.Api.Features.Traffic;

@@ -1,7 +1,7 @@
 using System.Collections.Concurrent;
 using Ledgerline.Api.Data;
-using Ledgerline.Api.Features.Decisions;
 using Ledgerline.Api.Features.Scorecards;
+using Ledgerline.Scoring.Engine;
 using Microsoft.EntityFrameworkCore;
 
 namespace Ledgerline.Api.Features.Traffic;

@@ -3,8 +3,8 @@ using System.Security.Cryptography;
 using System.Text.Json;
 using FluentValidation;
 using Ledgerline.Api.Data;
+using Ledgerline.Api.Data.Audit;
 using Ledgerline.Api.Features.Access;
-using Ledgerline.Api.Features.Audit;
 using Ledgerline.Api.Features.Scorecards;
 using Ledgerline.Api.Http;
 using Microsoft.AspNetCore.Http.HttpResults;
@@ -14,13 +14,6 @@ namespace Ledgerline.Api.Features.Traffic;
 
 public static class TrafficEndpoints
 {
-    public static IServiceCollection AddTraffic(this IServiceCollection services)
-    {
-        services.AddSingleton<PlanCache>();
-        services.AddSingleton<IValidator<TrafficPlanRequest>, TrafficPlanRequestValidator>();
-        return services;
-    }
-
     public static IEndpointRouteBuilder MapTraffic(this IEndpointRouteBuilder routes)
     {
         // Risk managers set the plan; analysts and risk managers read it and its history.

@@ -1,6 +1,0 @@
-using Microsoft.EntityFrameworkCore;
-
-namespace Ledgerline.Api.Data;
-
-/// <summary>The SQLite store (embedded default); owns the migrations under Data/Migrations/Sqlite.</summary>
-public sealed class SqliteLedgerlineDbContext(DbContextOptions<SqliteLedgerlineDbContext> options) : LedgerlineDbContext(options);
