@@ -52,7 +52,7 @@ internal sealed class PostgresDialect : StoreDialect
         }
 
         // One stream per call instead of a round trip per row; the columns, names and value
-        // conversions are the model's, as for every other statement (ModelStatement).
+        // conversions come from the model, like every other statement (ModelStatement).
         var insert = ModelStatement.Insert<TEntity>(db);
         var sql = db.GetService<ISqlGenerationHelper>();
         var table = sql.DelimitIdentifier(insert.Entity.GetTableName()!, insert.Entity.GetSchema());
