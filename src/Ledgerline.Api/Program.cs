@@ -24,6 +24,7 @@ builder.Services.AddTraffic();
 builder.Services.AddDecisions();
 builder.Services.AddReports();
 builder.Services.AddAlerts();
+builder.Services.AddOverview();
 ValidationNames.UseJsonNames();
 
 var app = builder.Build();

@@ -10,6 +10,23 @@ public static class OverviewCharts
     private static readonly Func<double, string> Share = v => Figures.Percent(v, 0);
     private static readonly Func<double, string> Plain = v => Figures.Score(v);
 
+    /// <summary>The chart panels in page order.</summary>
+    public static IReadOnlyList<ChartSection> All(OverviewData data)
+    {
+        List<ChartSection> sections = [Roc(data), Ks(data)];
+        sections.AddRange(SwapSets(data));
+        sections.AddRange(Calibration(data));
+        sections.Add(Psi(data));
+        if (Csi(data) is { } csi)
+        {
+            sections.Add(csi);
+        }
+
+        sections.AddRange(Distributions(data));
+        sections.Add(Maturity(data));
+        return sections;
+    }
+
     public static ChartSection Roc(OverviewData data)
     {
         var series = data.Versions.Where(v => v.Roc.Points.Count > 0)
@@ -20,14 +37,14 @@ public static class OverviewCharts
             new ChartAxis("Share of bads at or below the cut-off", 0, 1, Share),
             series)
         { Diagonal = true };
-        var table = new HtmlTable("AUC per version (95% confidence interval by DeLong)", "Version", "AUC", "95% CI", "Gini", "Goods", "Bads");
+        var table = new FigureTable("AUC per version (95% confidence interval by DeLong)", "Version", "AUC", "95% CI", "Gini", "Goods", "Bads");
         foreach (var v in data.Versions)
         {
             table.Row(v.Label, Figures.Number(v.Roc.Auc), v.Roc.ConfidenceInterval is { } ci ? $"{Figures.Number(ci.Lower)}–{Figures.Number(ci.Upper)}" : Figures.None,
                 Figures.Number(v.Roc.Gini), Figures.Count(v.Roc.Goods), Figures.Count(v.Roc.Bads));
         }
 
-        return new ChartSection("roc", "Discrimination: ROC curves", PerformancePopulation(data), chart.Render(), table.ToString());
+        return new ChartSection("roc", "Discrimination: ROC curves", PerformancePopulation(data), chart.Render(), table);
     }
 
     public static ChartSection Ks(OverviewData data)
@@ -41,13 +58,13 @@ public static class OverviewCharts
             new ChartAxis("Score", min, max, Plain, 6),
             new ChartAxis("Bads share minus goods share", 0, Math.Min(1, Math.Ceiling(top * 10 + 0.5) / 10), Share),
             series);
-        var table = new HtmlTable("KS statistic and the score where it peaks", "Version", "KS", "At score");
+        var table = new FigureTable("KS statistic and the score where it peaks", "Version", "KS", "At score");
         foreach (var v in data.Versions)
         {
             table.Row(v.Label, Figures.Number(v.Ks.Statistic), v.Ks.Score is { } s ? Figures.Score(s) : Figures.None);
         }
 
-        return new ChartSection("ks", "Separation: KS curves", PerformancePopulation(data), chart.Render(), table.ToString());
+        return new ChartSection("ks", "Separation: KS curves", PerformancePopulation(data), chart.Render(), table);
     }
 
     public static IEnumerable<ChartSection> Distributions(OverviewData data)
@@ -67,14 +84,14 @@ public static class OverviewCharts
                 "Score bin (upper edge, inclusive)", labels, new ChartAxis("Share of applications", 0, Math.Ceiling(top * 20 + 0.5) / 20, Share),
                 [new BarSeries("development", development.Select(d => (double?)d).ToList(), ChartPalette.Baseline),
                  new BarSeries("live", live.Select(b => b.Share).ToList(), v.Colour)]);
-            var table = new HtmlTable($"Score distribution of {v.Label}", "Score bin", "Development share", "Live share", "Live applications");
+            var table = new FigureTable($"Score distribution of {v.Label}", "Score bin", "Development share", "Live share", "Live applications");
             for (var i = 0; i < live.Count; i++)
             {
                 table.Row(labels[i], Figures.Percent(i < development.Count ? development[i] : null), Figures.Percent(live[i].Share), Figures.Count(live[i].Count));
             }
 
             yield return new ChartSection($"distribution-v{v.Number}", $"Score distribution: {v.Label}",
-                $"Every application {v.Label} scored, deciding or not; bins are the development baseline's; {data.Performance.Range}.", chart.Render(), table.ToString());
+                $"Every application {v.Label} scored, deciding or not; bins are the development baseline's; {data.Performance.Range}.", chart.Render(), table);
         }
     }
 
@@ -95,7 +112,7 @@ public static class OverviewCharts
         var headers = new List<string> { "Month" };
         headers.AddRange(withStability.Select(v => $"PSI {v.Label}"));
         headers.Add("Applications");
-        var table = new HtmlTable($"PSI per month (below {Figures.Number(thresholds.PsiAmber, 2)} no significant shift; {Figures.Number(thresholds.PsiAmber, 2)}–{Figures.Number(thresholds.PsiRed, 2)} investigate; above {Figures.Number(thresholds.PsiRed, 2)} act)", [.. headers]);
+        var table = new FigureTable($"PSI per month (below {Figures.Number(thresholds.PsiAmber, 2)} no significant shift; {Figures.Number(thresholds.PsiAmber, 2)}–{Figures.Number(thresholds.PsiRed, 2)} investigate; above {Figures.Number(thresholds.PsiRed, 2)} act)", [.. headers]);
         foreach (var month in months)
         {
             var cells = new List<string> { month };
@@ -105,7 +122,7 @@ public static class OverviewCharts
             table.Row([.. cells]);
         }
 
-        return new ChartSection("psi", "Stability: PSI per month", data.Stability.Values.FirstOrDefault()?.Population ?? "", chart.Render(), table.ToString());
+        return new ChartSection("psi", "Stability: PSI per month", data.Stability.Values.FirstOrDefault()?.Population ?? "", chart.Render(), table);
     }
 
     public static ChartSection? Csi(OverviewData data)
@@ -132,7 +149,7 @@ public static class OverviewCharts
         };
         var headers = new List<string> { "Characteristic" };
         headers.AddRange(withStability.Select(v => $"CSI {v.Label}"));
-        var table = new HtmlTable($"CSI per characteristic, {latest} (— where the version does not use it)", [.. headers]);
+        var table = new FigureTable($"CSI per characteristic, {latest} (— where the version does not use it)", [.. headers]);
         foreach (var name in names)
         {
             var cells = new List<string> { name };
@@ -140,7 +157,7 @@ public static class OverviewCharts
             table.Row([.. cells]);
         }
 
-        return new ChartSection("csi", $"Stability: characteristics in {latest}", "Which inputs moved: the share of each characteristic's bins against development.", chart.Render(), table.ToString());
+        return new ChartSection("csi", $"Stability: characteristics in {latest}", "Which inputs moved: the share of each characteristic's bins against development.", chart.Render(), table);
     }
 
     public static IEnumerable<ChartSection> Calibration(OverviewData data)
@@ -160,7 +177,7 @@ public static class OverviewCharts
                 "Score bin (upper edge, inclusive)", labels, new ChartAxis("Probability of bad", 0, Math.Max(0.02, Math.Ceiling(top * 50 + 0.5) / 50), v => Figures.Percent(v, 0)),
                 [new BarSeries("expected (scaling)", rows.Select(r => r.ExpectedProbabilityOfBad).ToList(), ChartPalette.Baseline),
                  new BarSeries("observed", rows.Select(r => r.ObservedBadRate).ToList(), v.Colour)]);
-            var table = new HtmlTable($"Calibration of {v.Label}; Hosmer–Lemeshow p = {Figures.Number(performance.HosmerLemeshow.PValue)}, Brier score {Figures.Number(performance.BrierScore, 4)}",
+            var table = new FigureTable($"Calibration of {v.Label}; Hosmer–Lemeshow p = {Figures.Number(performance.HosmerLemeshow.PValue)}, Brier score {Figures.Number(performance.BrierScore, 4)}",
                 "Score bin", "Matured", "Bads", "Expected", "Observed", "Jeffreys p", "Status");
             for (var i = 0; i < rows.Count; i++)
             {
@@ -169,7 +186,7 @@ public static class OverviewCharts
                     Figures.Percent(r.ObservedBadRate, 2), Figures.Number(r.JeffreysP), StatusWord(r.Status.ToString()));
             }
 
-            yield return new ChartSection($"calibration-v{v.Number}", $"Calibration: {v.Label}", performance.Population, chart.Render(), table.ToString());
+            yield return new ChartSection($"calibration-v{v.Number}", $"Calibration: {v.Label}", performance.Population, chart.Render(), table);
         }
     }
 
@@ -188,7 +205,7 @@ public static class OverviewCharts
             var chart = new BarChart($"swap-v{challenger.Version}", $"Swap set: champion v{champion}'s decision, split by challenger v{challenger.Version}'s",
                 $"Champion v{champion}'s decision", bands.Select(BandNames.ToWire).ToList(), new ChartAxis("Applications", 0, max, v => Figures.Count((long)v)), series)
             { Stacked = true };
-            var table = new HtmlTable($"Swap set, champion v{champion} against challenger v{challenger.Version}", "Champion", "Challenger", "Applications", "Matured", "Bads", "Bad rate");
+            var table = new FigureTable($"Swap set, champion v{champion} against challenger v{challenger.Version}", "Champion", "Challenger", "Applications", "Matured", "Bads", "Bad rate");
             foreach (var cell in cells)
             {
                 table.Row(BandNames.ToWire(cell.Champion), BandNames.ToWire(cell.Challenger), Figures.Count(cell.Count), Figures.Count(cell.Matured), Figures.Count(cell.Bads), Figures.Percent(cell.BadRate, 2));
@@ -196,7 +213,7 @@ public static class OverviewCharts
 
             var observed = string.Join(" ", cells.Select(c => c.Observed).Distinct(StringComparer.Ordinal));
             yield return new ChartSection($"swap-v{challenger.Version}", $"Swap set: v{champion} against v{challenger.Version}",
-                $"Applications scored by both; bad rates where the outcome has matured ({observed}).", chart.Render(), table.ToString());
+                $"Applications scored by both; bad rates where the outcome has matured ({observed}).", chart.Render(), table);
         }
     }
 
@@ -219,7 +236,7 @@ public static class OverviewCharts
             Stacked = true,
             LabelEvery = cohorts.Count > 12 ? 3 : 1,
         };
-        var table = new HtmlTable("Cohorts by month of application", "Month", "Applications", "Not approved", "Matured good", "Matured bad", "Indeterminate", "Immature");
+        var table = new FigureTable("Cohorts by month of application", "Month", "Applications", "Not approved", "Matured good", "Matured bad", "Indeterminate", "Immature");
         foreach (var c in cohorts)
         {
             table.Row(c.Month, Figures.Count(c.Total), Figures.Count(c.NotApproved), Figures.Count(c.MaturedGood), Figures.Count(c.MaturedBad),
@@ -228,7 +245,7 @@ public static class OverviewCharts
 
         return new ChartSection("maturity", "Maturity of cohorts",
             $"Decisions by the version that decided them; an approved loan matures when it goes bad or when its {data.PerformanceWindowMonths}-month window has passed at an observation. Only matured loans enter performance figures.",
-            chart.Render(), table.ToString());
+            chart.Render(), table);
     }
 
     private static IReadOnlyList<ChartBand> Bands(double amber, double red, double top) =>
@@ -245,4 +262,4 @@ public static class OverviewCharts
 }
 
 /// <summary>One chart panel: its SVG and the table of its numbers, with a line saying on which population it stands.</summary>
-public sealed record ChartSection(string Id, string Heading, string Population, string Svg, string Table);
+public sealed record ChartSection(string Id, string Heading, string Population, string Svg, FigureTable Table);

@@ -21,7 +21,7 @@ public static class OverviewEndpoints
         return routes;
     }
 
-    public static async Task<Results<ContentHttpResult, ValidationProblem, ProblemHttpResult>> GetOverview(
+    public static async Task<Results<RazorComponentResult<OverviewPage>, ValidationProblem, ProblemHttpResult>> GetOverview(
         string key, string? from, string? to, HttpContext context, LedgerlineDbContext db, ReportBuilder reports, TimeProvider clock, CancellationToken ct)
     {
         if (!AcceptsHtml(context.Request))
@@ -45,7 +45,11 @@ public static class OverviewEndpoints
         var data = await new OverviewBuilder(db, reports, clock).BuildAsync(scorecard, query!, ct);
         context.Response.Headers.ContentSecurityPolicy = ContentSecurityPolicy;
         context.Response.Headers.CacheControl = "no-store";
-        return TypedResults.Content(OverviewPage.Render(data), HtmlMediaType + "; charset=utf-8");
+        // Razor components escape every value by default; only the SVG fragments are passed as markup.
+        return new RazorComponentResult<OverviewPage>(new Dictionary<string, object?> { [nameof(OverviewPage.Data)] = data })
+        {
+            ContentType = HtmlMediaType + "; charset=utf-8",
+        };
     }
 
     /// <summary>HTML when the client names it, or takes anything (curl's default); a JSON-only client is told where the JSON is.</summary>
