@@ -7,16 +7,6 @@ namespace Ledgerline.Api.Tests.Alerts;
 
 public sealed class AlertTests
 {
-    private static readonly int[] UtilisationPoints = [40, 25, 5];
-
-    private static async Task<(MonitoredLender Lender, int Version)> ChampionOnlyAsync(LedgerlineApp app)
-    {
-        var lender = await MonitoredLender.CreateAsync(app);
-        var version = await lender.AddApprovedVersionAsync(MonitoredLender.Version("Champion", UtilisationPoints));
-        await lender.SetPlanAsync(version);
-        return (lender, version);
-    }
-
     [Fact]
     public async Task Alerts_ShiftedPopulation_TurnsRedOpensOnceAndClosesWhenShiftEnds()
     {
@@ -26,7 +16,7 @@ public sealed class AlertTests
             ["Alerts:WebhookUrl"] = receiver.Url,
             ["Alerts:WebhookPollSeconds"] = "0.05",
         });
-        var (lender, version) = await ChampionOnlyAsync(app);
+        var (lender, version) = await MonitoredLender.ChampionOnlyAsync(app);
         await lender.DecideAsync(400, "2026-09-10", seed: 21, shifted: true);
 
         var stability = await MonitoredLender.GetJsonAsync(lender.Risk, $"{MonitoredLender.Reports}/stability?version={version}");
@@ -71,7 +61,7 @@ public sealed class AlertTests
             ["Alerts:WebhookPollSeconds"] = "0.05",
             ["Alerts:WebhookFirstRetrySeconds"] = "0.1",
         });
-        var (lender, _) = await ChampionOnlyAsync(app);
+        var (lender, _) = await MonitoredLender.ChampionOnlyAsync(app);
         await lender.DecideAsync(300, "2026-09-10", seed: 23, shifted: true);
 
         var evaluation = await EvaluateAsync(lender);

@@ -43,6 +43,17 @@ public sealed class MonitoredLender
         return lender;
     }
 
+    private static readonly int[] ChampionUtilisationPoints = [40, 25, 5];
+
+    /// <summary>A lender whose plan holds one approved champion and nothing else.</summary>
+    public static async Task<(MonitoredLender Lender, int Version)> ChampionOnlyAsync(LedgerlineApp app)
+    {
+        var lender = await CreateAsync(app);
+        var version = await lender.AddApprovedVersionAsync(Version("Champion", ChampionUtilisationPoints));
+        await lender.SetPlanAsync(version);
+        return (lender, version);
+    }
+
     /// <summary>
     /// A points table over monthsAtAddress and cardUtilisation. <paramref name="utilisationPoints"/>
     /// gives the points of the three utilisation bins (low, middle, high).

@@ -5,21 +5,11 @@ namespace Ledgerline.Api.Tests.Reports;
 
 public sealed class StabilityTests
 {
-    private static readonly int[] UtilisationPoints = [40, 25, 5];
-
-    private static async Task<(MonitoredLender Lender, int Version)> ChampionOnlyAsync(LedgerlineApp app)
-    {
-        var lender = await MonitoredLender.CreateAsync(app);
-        var version = await lender.AddApprovedVersionAsync(MonitoredLender.Version("Champion", UtilisationPoints));
-        await lender.SetPlanAsync(version);
-        return (lender, version);
-    }
-
     [Fact]
     public async Task Stability_PopulationLikeDevelopment_IsGreenPerMonth()
     {
         await using var app = new LedgerlineApp();
-        var (lender, version) = await ChampionOnlyAsync(app);
+        var (lender, version) = await MonitoredLender.ChampionOnlyAsync(app);
         await lender.DecideAsync(800, "2026-09-10", seed: 11);
         await lender.DecideAsync(800, "2026-10-10", seed: 12);
 
@@ -42,7 +32,7 @@ public sealed class StabilityTests
     public async Task Stability_WeekPeriod_GroupsByIsoWeek()
     {
         await using var app = new LedgerlineApp();
-        var (lender, version) = await ChampionOnlyAsync(app);
+        var (lender, version) = await MonitoredLender.ChampionOnlyAsync(app);
         await lender.DecideAsync(50, "2026-11-02", seed: 3);
         await lender.DecideAsync(50, "2026-11-08", seed: 4);
         await lender.DecideAsync(50, "2026-11-09", seed: 5);
@@ -59,7 +49,7 @@ public sealed class StabilityTests
     {
         await using var app = new LedgerlineApp();
         var lender = await MonitoredLender.CreateAsync(app);
-        var draft = await lender.AddApprovedVersionAsync(MonitoredLender.Version("Draft without baseline", UtilisationPoints), withBaseline: false);
+        var draft = await lender.AddApprovedVersionAsync(MonitoredLender.Version("Draft without baseline", [40, 25, 5]), withBaseline: false);
 
         var report = await MonitoredLender.GetJsonAsync(lender.Analyst, $"{MonitoredLender.Reports}/stability?version={draft}");
 
@@ -72,7 +62,7 @@ public sealed class StabilityTests
     public async Task Stability_AcceptCsv_AnswersOneRowPerPeriodAndSubject()
     {
         await using var app = new LedgerlineApp();
-        var (lender, version) = await ChampionOnlyAsync(app);
+        var (lender, version) = await MonitoredLender.ChampionOnlyAsync(app);
         await lender.DecideAsync(100, "2026-09-10", seed: 31);
         using var request = new HttpRequestMessage(HttpMethod.Get, $"{MonitoredLender.Reports}/stability?version={version}");
         request.Headers.Accept.ParseAdd("text/csv");
