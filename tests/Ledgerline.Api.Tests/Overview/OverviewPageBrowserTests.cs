@@ -7,7 +7,7 @@ namespace Ledgerline.Api.Tests.Overview;
 public sealed class OverviewPageBrowserTests
 {
     private static readonly string[] ExpectedCharts =
-        ["roc", "ks", "swap-v2", "calibration-v1", "calibration-v2", "psi", "csi", "distribution-v1", "distribution-v2", "distribution-v3", "maturity"];
+        ["roc", "ks", "swap-v2", "capture-v1", "capture-v2", "calibration-v1", "calibration-v2", "psi", "csi", "distribution-v1", "distribution-v2", "distribution-v3", "maturity"];
 
     [Fact]
     public async Task OverviewPage_DemoScenarioInHeadlessChromium_RendersEveryChartWithoutErrorsOrOutsideRequests()
@@ -66,6 +66,33 @@ public sealed class OverviewPageBrowserTests
         Assert.Contains(pageUrl.ToString(), requests);
         var outside = requests.Where(u => !u.StartsWith(origin + "/", StringComparison.Ordinal)).ToList();
         Assert.True(outside.Count == 0, "requests left the service's host: " + string.Join(", ", outside));
+
+        // Tables and legends must fit at common desktop widths: a cut column or legend hides a figure.
+        foreach (var width in new[] { 1400, 1920 })
+        {
+            await browser.SendAsync("Emulation.setDeviceMetricsOverride", new { width, height = 1000, deviceScaleFactor = 1, mobile = false });
+            var overflowing = await EvaluateAsync(browser, """
+                JSON.stringify([
+                  ...[...document.querySelectorAll('table')].filter(t => t.parentElement.scrollWidth > t.parentElement.clientWidth + 1)
+                     .map(t => 'table: ' + (t.caption?.textContent ?? '')),
+                  ...[...document.querySelectorAll('svg[data-chart] text')].filter(t => {
+                       const box = t.getBoundingClientRect(), svg = t.ownerSVGElement.getBoundingClientRect();
+                       return box.right > svg.right + 1 || box.left < svg.left - 1; })
+                     .map(t => 'chart text: ' + t.ownerSVGElement.dataset.chart + ' "' + t.textContent + '"')])
+                """);
+            Assert.True(overflowing == "[]", $"at {width} px these do not fit: {overflowing}");
+        }
+
+        // Printed as a monitoring pack: no panel may be split across A4 pages, so each must avoid
+        // breaks and be shorter than a page's printable height (297 mm - 2 x 12 mm margins, at 96 px per inch).
+        await browser.SendAsync("Emulation.setEmulatedMedia", new { media = "print" });
+        await browser.SendAsync("Emulation.setDeviceMetricsOverride", new { width = 718, height = 1000, deviceScaleFactor = 1, mobile = false });
+        var splittable = await EvaluateAsync(browser, """
+            JSON.stringify([...document.querySelectorAll('main > section')]
+              .filter(s => getComputedStyle(s).breakInside !== 'avoid' || s.getBoundingClientRect().height > (297 - 24) / 25.4 * 96)
+              .map(s => (s.id || s.className) + ' ' + Math.round(s.getBoundingClientRect().height) + 'px'))
+            """);
+        Assert.True(splittable == "[]", "sections that would be cut across printed pages: " + splittable);
     }
 
     private static async Task WaitUntilHealthyAsync(HttpClient client)

@@ -10,11 +10,15 @@ public static class OverviewCharts
     private static readonly Func<double, string> Share = v => Figures.Percent(v, 0);
     private static readonly Func<double, string> Plain = v => Figures.Score(v);
 
+    // Room on the right for the "100%" label centred on the last tick.
+    private static readonly PlotArea ShareArea = PlotArea.Standard with { Right = 28 };
+
     /// <summary>The chart panels in page order.</summary>
     public static IReadOnlyList<ChartSection> All(OverviewData data)
     {
         List<ChartSection> sections = [Roc(data), Ks(data)];
         sections.AddRange(SwapSets(data));
+        sections.AddRange(Capture(data));
         sections.AddRange(Calibration(data));
         sections.Add(Psi(data));
         if (Csi(data) is { } csi)
@@ -36,7 +40,7 @@ public static class OverviewCharts
             new ChartAxis("Share of goods at or below the cut-off", 0, 1, Share),
             new ChartAxis("Share of bads at or below the cut-off", 0, 1, Share),
             series)
-        { Diagonal = true };
+        { Diagonal = true, Area = ShareArea };
         var table = new FigureTable("AUC per version (95% confidence interval by DeLong)", "Version", "AUC", "95% CI", "Gini", "Goods", "Bads");
         foreach (var v in data.Versions)
         {
@@ -113,7 +117,8 @@ public static class OverviewCharts
         headers.AddRange(withStability.Select(v => $"PSI {v.Label}"));
         headers.Add("Applications");
         var table = new FigureTable($"PSI per month (below {Figures.Number(thresholds.PsiAmber, 2)} no significant shift; {Figures.Number(thresholds.PsiAmber, 2)}–{Figures.Number(thresholds.PsiRed, 2)} investigate; above {Figures.Number(thresholds.PsiRed, 2)} act)", [.. headers]);
-        foreach (var month in months)
+        // Newest first: the month a reader came for is the latest one.
+        foreach (var month in Enumerable.Reverse(months))
         {
             var cells = new List<string> { month };
             cells.AddRange(withStability.Select(v => data.Stability[v.Number].Periods.FirstOrDefault(p => p.Period == month) is { } p
@@ -122,7 +127,11 @@ public static class OverviewCharts
             table.Row([.. cells]);
         }
 
-        return new ChartSection("psi", "Stability: PSI per month", data.Stability.Values.FirstOrDefault()?.Population ?? "", chart.Render(), table);
+        // One sentence for every version shown: each is measured against its own development sample.
+        var shown = string.Join(", ", withStability.Select(v => v.Label));
+        var population = withStability.Count == 0 ? "No version in the plan has a development baseline to compare with."
+            : $"Every application scored by {shown} (deciding or not, any decision, matured or not), each version against its own development sample; {data.Performance.Range}.";
+        return new ChartSection("psi", "Stability: PSI per month", population, chart.Render(), table);
     }
 
     public static ChartSection? Csi(OverviewData data)
@@ -160,6 +169,39 @@ public static class OverviewCharts
         return new ChartSection("csi", $"Stability: characteristics in {latest}", "Which inputs moved: the share of each characteristic's bins against development.", chart.Render(), table);
     }
 
+    /// <summary>
+    /// Cumulative share of bads caught against the share of applications, lowest scores first (a
+    /// gains chart, common practice): the further above the diagonal, the more bads a cut-off removes per application lost.
+    /// </summary>
+    public static IEnumerable<ChartSection> Capture(OverviewData data)
+    {
+        foreach (var v in data.Versions.Where(v => v.Role != "shadow"))
+        {
+            var performance = data.Performance.Versions.FirstOrDefault(p => p.Version == v.Number);
+            if (performance is null || performance.CaptureAndLift.Count == 0)
+            {
+                continue;
+            }
+
+            var rows = performance.CaptureAndLift;
+            List<ChartPoint> points = [new(0, 0), .. rows.Select(r => new ChartPoint(r.PopulationShare, r.CaptureRate))];
+            var chart = new LineChart($"capture-v{v.Number}", $"Share of bads among the lowest-scoring applications, {v.Label}",
+                new ChartAxis("Share of applications, lowest scores first", 0, 1, Share),
+                new ChartAxis("Share of all bads captured", 0, 1, Share),
+                [new LineSeries(v.Label, points, v.Colour)])
+            { Diagonal = true, Area = ShareArea };
+            var table = new FigureTable($"Capture and lift of {v.Label} by score group (tenths of the matured applications, lowest scores first)",
+                "Group", "Up to score", "Applications", "Bads", "Bad rate", "Bads captured", "Lift");
+            foreach (var r in rows)
+            {
+                table.Row(r.Group.ToString(System.Globalization.CultureInfo.InvariantCulture), Figures.Score(r.UpperScore), Figures.Number(r.Decisions, 0), Figures.Number(r.Bads, 0),
+                    Figures.Percent(r.GroupBadRate, 2), Figures.Percent(r.CaptureRate), Figures.Number(r.Lift, 2));
+            }
+
+            yield return new ChartSection($"capture-v{v.Number}", $"Capture and lift: {v.Label}", performance.Population, chart.Render(), table);
+        }
+    }
+
     public static IEnumerable<ChartSection> Calibration(OverviewData data)
     {
         foreach (var v in data.Versions.Where(v => v.Role != "shadow"))
@@ -193,7 +235,7 @@ public static class OverviewCharts
     public static IEnumerable<ChartSection> SwapSets(OverviewData data)
     {
         Band[] bands = [Band.Approve, Band.Refer, Band.Decline];
-        string[] colours = [ChartPalette.Good, ChartPalette.AmberBand, ChartPalette.Bad];
+        string[] colours = [ChartPalette.Good, ChartPalette.Refer, ChartPalette.Bad];
         foreach (var challenger in data.Comparison.Challengers)
         {
             var cells = challenger.SwapSet;
@@ -224,9 +266,9 @@ public static class OverviewCharts
         [
             ("matured good", ChartPalette.Good, c => c.MaturedGood),
             ("matured bad", ChartPalette.Bad, c => c.MaturedBad),
-            ("indeterminate", ChartPalette.Challenger, c => c.MaturedIndeterminate),
+            ("indeterminate", ChartPalette.Shadow, c => c.MaturedIndeterminate),
             ("immature", ChartPalette.Pending, c => c.Immature),
-            ("not approved", "#eceff4", c => c.NotApproved),
+            ("not approved", ChartPalette.NotApproved, c => c.NotApproved),
         ];
         var series = parts.Select(p => new BarSeries(p.Name, cohorts.Select(c => (double?)p.Count(c)).ToList(), p.Colour)).ToList();
         var (_, max) = Charts.LinearScale.NiceDomain(0, Math.Max(1, cohorts.Select(c => c.Total).DefaultIfEmpty(1).Max()), 5);
@@ -237,7 +279,7 @@ public static class OverviewCharts
             LabelEvery = cohorts.Count > 12 ? 3 : 1,
         };
         var table = new FigureTable("Cohorts by month of application", "Month", "Applications", "Not approved", "Matured good", "Matured bad", "Indeterminate", "Immature");
-        foreach (var c in cohorts)
+        foreach (var c in cohorts.Reverse())
         {
             table.Row(c.Month, Figures.Count(c.Total), Figures.Count(c.NotApproved), Figures.Count(c.MaturedGood), Figures.Count(c.MaturedBad),
                 Figures.Count(c.MaturedIndeterminate), Figures.Count(c.Immature));

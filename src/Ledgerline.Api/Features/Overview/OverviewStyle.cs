@@ -21,22 +21,24 @@ public static class OverviewStyle
         .verdict p{margin:4px 0}
         .rule,.population{color:var(--muted);font-size:13px;margin:0 0 10px}
         .alerts ul{list-style:none;padding:0;margin:0;display:grid;gap:6px}
+        .alerts details{margin-top:8px} .alerts summary{cursor:pointer;color:var(--accent)} .alerts details ul{margin-top:6px}
         .alerts li{padding:8px 10px;border-radius:6px;background:#fbe7c2}
         .alerts li.red{background:#f7d0c8}
         .badge{display:inline-block;font-size:11px;font-weight:700;text-transform:uppercase;letter-spacing:.08em;padding:1px 7px;border-radius:4px;background:var(--amber);color:#fff}
         .alerts li.red .badge{background:var(--red)}
-        .pair{display:grid;grid-template-columns:minmax(0,1.25fr) minmax(0,1fr);gap:20px;align-items:start}
+        .pair{display:grid;grid-template-columns:repeat(auto-fit,minmax(min(100%,520px),1fr));gap:20px;align-items:start}
+        .pair.wide{grid-template-columns:1fr} .pair.wide figure{max-width:680px}
         figure{margin:0}
         svg{width:100%;height:auto;display:block}
-        .numbers{max-height:360px;overflow:auto}
+        .numbers{overflow-x:auto}
         table{border-collapse:collapse;width:100%;font-size:13px;font-variant-numeric:tabular-nums}
         caption{text-align:left;font-size:12px;color:var(--muted);padding-bottom:6px}
         th,td{padding:4px 8px;border-bottom:1px solid var(--line);text-align:right;white-space:nowrap}
         th:first-child,thead th:first-child{text-align:left}
-        thead th{position:sticky;top:0;background:var(--card);font-weight:600;border-bottom:2px solid var(--ink)}
+        thead th{background:var(--card);font-weight:600;border-bottom:2px solid var(--ink);white-space:normal;vertical-align:bottom}
         tbody th{font-weight:500}
         footer{max-width:1320px;margin:0 auto;padding:0 32px 32px;color:var(--muted);font-size:12px}
-        @media (max-width:900px){.pair{grid-template-columns:1fr}}
+                @page{size:A4;margin:12mm}
         @media print{
           body{background:#fff;font-size:11px}
           header{background:#fff;color:var(--ink);border-bottom:2px solid var(--ink);padding:0 0 8px}
@@ -44,7 +46,8 @@ public static class OverviewStyle
           main{padding:8px 0;max-width:none}
           .panel,.verdict,.alerts,.summary{break-inside:avoid;border-color:#999}
           .numbers{max-height:none;overflow:visible}
-          .pair{grid-template-columns:1.2fr 1fr}
+          .pair{grid-template-columns:1fr}
+          details{display:block} details>*{display:block}
         }
         """;
 }

@@ -107,15 +107,27 @@ public sealed class SvgCanvas
         Line(Area.PlotLeft, Area.PlotTop, Area.PlotLeft, Area.PlotBottom, ChartPalette.Ink);
     }
 
-    /// <summary>Swatches and names in a row above the plot, right-aligned entries laid out left to right.</summary>
+    /// <summary>
+    /// Swatches and names above the plot, left to right, starting a second row where the first
+    /// would pass the right edge (a legend cut off at the edge hides what a colour means).
+    /// </summary>
     public void Legend(IEnumerable<(string Name, string Colour, bool Dashed)> entries)
     {
+        const double rowHeight = 15;
         var x = Area.PlotLeft;
+        var y = 12.0;
         foreach (var (name, colour, dashed) in entries)
         {
-            Line(x, 16, x + 22, 16, colour, 3, dashed ? "6 3" : null);
-            Text(x + 28, 20, name, "start", ChartPalette.Ink);
-            x += 40 + (name.Length * 6.6);
+            var width = 40 + (name.Length * 6.6);
+            if (x > Area.PlotLeft && x + width - 12 > Area.Width - 4)
+            {
+                x = Area.PlotLeft;
+                y += rowHeight;
+            }
+
+            Line(x, y, x + 22, y, colour, 3, dashed ? "6 3" : null);
+            Text(x + 28, y + 4, name, "start", ChartPalette.Ink);
+            x += width;
         }
     }
 
