@@ -83,16 +83,43 @@ public sealed class OverviewPageBrowserTests
             Assert.True(overflowing == "[]", $"at {width} px these do not fit: {overflowing}");
         }
 
-        // Printed as a monitoring pack: no panel may be split across A4 pages, so each must avoid
-        // breaks and be shorter than a page's printable height (297 mm - 2 x 12 mm margins, at 96 px per inch).
+        // Printed as a monitoring pack: no chart and no verdict or alert box may be cut across A4
+        // pages, so each must avoid breaks and be shorter than a page's printable height
+        // (297 mm - 2 x 12 mm margins, at 96 px per inch). Long tables may continue on the next
+        // page between rows, with their header repeated.
         await browser.SendAsync("Emulation.setEmulatedMedia", new { media = "print" });
         await browser.SendAsync("Emulation.setDeviceMetricsOverride", new { width = 718, height = 1000, deviceScaleFactor = 1, mobile = false });
         var splittable = await EvaluateAsync(browser, """
-            JSON.stringify([...document.querySelectorAll('main > section')]
+            JSON.stringify([...document.querySelectorAll('main figure, main .verdict, main .alerts, main .summary')]
               .filter(s => getComputedStyle(s).breakInside !== 'avoid' || s.getBoundingClientRect().height > (297 - 24) / 25.4 * 96)
-              .map(s => (s.id || s.className) + ' ' + Math.round(s.getBoundingClientRect().height) + 'px'))
+              .map(s => (s.querySelector('svg')?.dataset.chart || s.className) + ' ' + Math.round(s.getBoundingClientRect().height) + 'px'))
             """);
-        Assert.True(splittable == "[]", "sections that would be cut across printed pages: " + splittable);
+        Assert.True(splittable == "[]", "charts or boxes that would be cut across printed pages: " + splittable);
+
+        // The browser's own print to PDF, rasterised by poppler's pdftoppm: A4 pages, each with ink on it.
+        var pages = await PrintToPagesAsync(browser);
+        Assert.InRange(pages.Length, 2, 40);
+        Assert.All(pages, page => Assert.True(new FileInfo(page).Length > 2_000, page + " is blank"));
+    }
+
+    private static async Task<string[]> PrintToPagesAsync(HeadlessChromium browser)
+    {
+        await browser.SendAsync("Emulation.clearDeviceMetricsOverride");
+        var pdf = await browser.SendAsync("Page.printToPDF", new { paperWidth = 210 / 25.4, paperHeight = 297 / 25.4, preferCSSPageSize = true, printBackground = true });
+        var folder = Path.Combine(AppContext.BaseDirectory, "screenshots");
+        Directory.CreateDirectory(folder);
+        var pdfPath = Path.Combine(folder, "overview.pdf");
+        await File.WriteAllBytesAsync(pdfPath, Convert.FromBase64String(pdf["data"]!.GetValue<string>()));
+        foreach (var old in Directory.GetFiles(folder, "overview-print-*.png"))
+        {
+            File.Delete(old);
+        }
+
+        using var raster = System.Diagnostics.Process.Start(new System.Diagnostics.ProcessStartInfo("pdftoppm", ["-r", "40", "-png", pdfPath, Path.Combine(folder, "overview-print")]) { RedirectStandardError = true })!;
+        var errors = await raster.StandardError.ReadToEndAsync();
+        await raster.WaitForExitAsync();
+        Assert.True(raster.ExitCode == 0, "pdftoppm failed: " + errors);
+        return Directory.GetFiles(folder, "overview-print-*.png").Order(StringComparer.Ordinal).ToArray();
     }
 
     private static async Task WaitUntilHealthyAsync(HttpClient client)

@@ -38,13 +38,15 @@ public static class OverviewStyle
         thead th{background:var(--card);font-weight:600;border-bottom:2px solid var(--ink);white-space:normal;vertical-align:bottom}
         tbody th{font-weight:500}
         footer{max-width:1320px;margin:0 auto;padding:0 32px 32px;color:var(--muted);font-size:12px}
-                @page{size:A4;margin:12mm}
+        @page{size:A4;margin:12mm}
         @media print{
           body{background:#fff;font-size:11px}
           header{background:#fff;color:var(--ink);border-bottom:2px solid var(--ink);padding:0 0 8px}
           .brand{color:var(--muted)} .meta{color:var(--muted)}
           main{padding:8px 0;max-width:none}
-          .panel,.verdict,.alerts,.summary{break-inside:avoid;border-color:#999}
+          .panel,.verdict,.alerts,.summary{border-color:#999}
+          figure,.verdict,.alerts,.summary,tr{break-inside:avoid}
+          h2,figcaption{break-after:avoid}
           .numbers{max-height:none;overflow:visible}
           .pair{grid-template-columns:1fr}
           details{display:block} details>*{display:block}
