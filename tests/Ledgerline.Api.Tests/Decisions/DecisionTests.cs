@@ -17,9 +17,12 @@ public sealed class DecisionTests
 
         var body = await LiveScoringSetup.BodyAsync(response);
         Assert.True(response.StatusCode == HttpStatusCode.Created, body.ToString());
+        // The contract's fields in its order; "unmatched" follows only when a value took other or missing points.
+        var names = body.EnumerateObject().Select(p => p.Name).ToList();
         Assert.Equal(
             ["decisionId", "applicationId", "version", "role", "score", "probabilityOfBad", "decision", "planRevision", "reasonCodes"],
-            body.EnumerateObject().Select(p => p.Name));
+            names.Take(9));
+        Assert.Equal(body.GetProperty("version").GetInt32() == 2 ? ["unmatched"] : [], names.Skip(9));
         Assert.Equal("APP-0001234", body.GetProperty("applicationId").GetString());
         Assert.Equal(1, app.CountRows("Decisions"));
         Assert.Equal(3, app.CountRows("DecisionScores"));
@@ -62,6 +65,38 @@ public sealed class DecisionTests
 
         Assert.Single(versions);
         Assert.Equal(2, byApplication.Count); // with a 50% share, 12 application ids all on one arm has odds 1 in 2,048
+    }
+
+    [Fact]
+    public async Task Decide_CategoryNoBinLists_AnswerSaysItFellIntoOtherAndAReplaySaysTheSame()
+    {
+        await using var app = new LedgerlineApp();
+        var setup = await LiveScoringSetup.WithPlanAsync(app, 0.5m);
+        // "Tenant" is not "tenant": categories are compared exactly, so it takes otherPoints (48).
+        var application = LiveScoringSetup.Application("APP-U1", residentialStatus: "Tenant");
+
+        var first = await LiveScoringSetup.BodyAsync(await setup.DecideAsync(application));
+        var replay = await LiveScoringSetup.BodyAsync(await setup.DecideAsync(application));
+        var matched = await LiveScoringSetup.BodyAsync(await setup.DecideAsync(LiveScoringSetup.Application("APP-U2", residentialStatus: "tenant")));
+
+        const string other = """{"characteristic":"residentialStatus","value":"Tenant","bin":"other"}""";
+        var unmatched = first.GetProperty("unmatched").GetRawText();
+        if (first.GetProperty("version").GetInt32() == 2)
+        {
+            // Version 2 also reads a characteristic the application does not send (its missing points apply).
+            Assert.Contains("\"bin\":\"missing\"", unmatched, StringComparison.Ordinal);
+            Assert.Contains(other, unmatched, StringComparison.Ordinal);
+        }
+        else
+        {
+            Assert.Equal("[" + other + "]", unmatched);
+        }
+
+        Assert.Equal(unmatched, replay.GetProperty("unmatched").GetRawText());
+        if (matched.GetProperty("version").GetInt32() == 1)
+        {
+            Assert.False(matched.TryGetProperty("unmatched", out _), matched.ToString());
+        }
     }
 
     [Fact]

@@ -27,7 +27,18 @@ public sealed record DecisionResponse(
     double ProbabilityOfBad,
     Band Decision,
     int PlanRevision,
-    IReadOnlyList<ReasonCodeResponse> ReasonCodes);
+    IReadOnlyList<ReasonCodeResponse> ReasonCodes,
+    IReadOnlyList<UnmatchedValue>? Unmatched = null);
+
+/// <summary>
+/// A characteristic of the deciding version whose value no bin lists (its <c>otherPoints</c>
+/// applied) or that was missing (its <c>missingPoints</c> applied). Categories are compared
+/// exactly: case, spaces and accents count.
+/// </summary>
+/// <param name="Characteristic">The characteristic's name.</param>
+/// <param name="Value">The value sent; absent when it was missing.</param>
+/// <param name="Bin"><c>other</c> or <c>missing</c>.</param>
+public sealed record UnmatchedValue(string Characteristic, string? Value, string Bin);
 
 /// <summary>Up to <see cref="DecisionsEndpoints.MaxBatchItems"/> applications; each is decided or refused on its own.</summary>
 public sealed record DecisionBatchRequest(IReadOnlyList<DecisionRequest?>? Applications);

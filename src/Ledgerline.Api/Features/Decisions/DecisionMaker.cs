@@ -82,7 +82,23 @@ public static class DecisionMaker
         }
 
         problem = null;
-        return new PreparedDecision(decision, ToResponse(decision, reasons));
+        return new PreparedDecision(decision, ToResponse(decision, reasons) with { Unmatched = Unmatched(deciding.Compiled, values, result) });
+    }
+
+    /// <summary>The values that fell into the other or missing points, so the caller sees a category typo at once.</summary>
+    private static List<UnmatchedValue>? Unmatched(CompiledScorecard compiled, ScoringValue[] values, ScoreResult result)
+    {
+        List<UnmatchedValue>? unmatched = null;
+        for (var i = 0; i < result.MatchedBins.Length; i++)
+        {
+            var bin = result.MatchedBins[i];
+            if (bin is MatchedBin.Other or MatchedBin.Missing)
+            {
+                (unmatched ??= []).Add(new UnmatchedValue(compiled.NameAt(i), bin == MatchedBin.Other ? values[i].Text : null, bin == MatchedBin.Other ? "other" : "missing"));
+            }
+        }
+
+        return unmatched;
     }
 
     public static DecisionResponse ToResponse(Decision d, IReadOnlyList<ReasonCodeResponse>? reasons = null) => new(

@@ -60,7 +60,7 @@ public static class DecisionsEndpoints
             return TypedResults.Created(Location(key, request.ApplicationId!), prepared.Response);
         }
 
-        var (replay, conflict) = await DuplicateResolution.ResolveAsync(db, prepared.Record, ct);
+        var (replay, conflict) = await DuplicateResolution.ResolveAsync(db, prepared.Record, prepared.Response, ct);
         return replay is not null ? TypedResults.Ok(replay) : Problems.Conflict(conflict!);
     }
 
@@ -120,7 +120,7 @@ public static class DecisionsEndpoints
                 continue;
             }
 
-            var (replay, conflict) = await DuplicateResolution.ResolveAsync(db, prepared.Record, ct);
+            var (replay, conflict) = await DuplicateResolution.ResolveAsync(db, prepared.Record, prepared.Response, ct);
             results[index] = replay is not null
                 ? new DecisionBatchItem(index, replay.ApplicationId, StatusCodes.Status200OK, replay, null)
                 : new DecisionBatchItem(index, prepared.Record.ApplicationId, StatusCodes.Status409Conflict, null, $"applications[{index}]: {conflict}");
