@@ -75,6 +75,20 @@ public sealed class GermanCreditReportTests
         Assert.Equal(0, development.GetProperty("aucDeclineTest").GetProperty("decline").GetDouble(), 12);
         Assert.Equal(0.5, development.GetProperty("aucDeclineTest").GetProperty("pValue").GetDouble(), 12);
         Assert.Equal(figures.GetProperty("hosmerLemeshow").GetProperty("groups").GetInt32(), figures.GetProperty("hosmerLemeshow").GetProperty("degreesOfFreedom").GetInt32());
+
+        // The CSV form carries every table of the same report, one section each (README "Reports").
+        using var csvRequest = new HttpRequestMessage(HttpMethod.Get, $"/scorecards/{Key}/reports/performance?version={version}&from=2025-01-01&to=2025-01-31");
+        csvRequest.Headers.Accept.ParseAdd("text/csv");
+        var csv = await (await analyst.SendAsync(csvRequest)).Content.ReadAsStringAsync();
+        var sections = csv.Split("\r\n\r\n").Select(s => s.Split("\r\n", StringSplitOptions.RemoveEmptyEntries)).ToList();
+        Assert.Equal(["version", "scoreDistribution", "captureAndLift", "calibration", "rankOrdering"], sections.Select(s => s[0].Split(',')[0]));
+        Assert.Equal("0.7754380952", sections[0][1].Split(',')[6][..12]);
+        Assert.Equal(figures.GetProperty("scoreDistribution").GetArrayLength(), sections[1].Length - 2);
+        Assert.Equal(figures.GetProperty("captureAndLift").GetArrayLength(), sections[2].Length - 2);
+        Assert.Equal(figures.GetProperty("calibration").GetArrayLength(), sections[3].Length - 2);
+        Assert.StartsWith("version,upTo,matured,bads,expectedProbabilityOfBad", sections[3][1], StringComparison.Ordinal);
+        var firstBin = figures.GetProperty("calibration")[0];
+        Assert.Equal([$"{version}", $"{firstBin.GetProperty("upTo")}", $"{firstBin.GetProperty("matured")}", $"{firstBin.GetProperty("bads")}"], sections[3][2].Split(',').Take(4));
     }
 
     private static string ReferencePath(string file)

@@ -1,5 +1,6 @@
 using System.Globalization;
 using System.Text;
+using System.Text.Json;
 
 namespace Ledgerline.Api.Features.Reports;
 
@@ -8,6 +9,11 @@ public static class ReportCsv
 {
     public const string MediaType = "text/csv";
 
+    /// <summary>
+    /// Every table of the performance report in one file: the summary first (so a reader that takes
+    /// the first table gets what it always got), then each further table after a blank line, under a
+    /// row holding only the table's name, with its own header row.
+    /// </summary>
     public static string Performance(PerformanceReport report)
     {
         var csv = new StringBuilder();
@@ -20,7 +26,49 @@ public static class ReportCsv
                 v.Development?.Auc, v.Development?.AucDeclineTest?.PValue, v.Population);
         }
 
+        Section(csv, "scoreDistribution", "version", "upTo", "count", "share");
+        foreach (var v in report.Versions)
+        {
+            foreach (var bin in v.ScoreDistribution)
+            {
+                Row(csv, v.Version, bin.UpTo, bin.Count, bin.Share);
+            }
+        }
+
+        Section(csv, "captureAndLift", "version", "group", "populationShare", "upperScore", "decisions", "bads", "groupBadRate", "captureRate", "lift");
+        foreach (var v in report.Versions)
+        {
+            foreach (var g in v.CaptureAndLift)
+            {
+                Row(csv, v.Version, g.Group, g.PopulationShare, g.UpperScore, g.Decisions, g.Bads, g.GroupBadRate, g.CaptureRate, g.Lift);
+            }
+        }
+
+        Section(csv, "calibration", "version", "upTo", "matured", "bads", "expectedProbabilityOfBad", "observedBadRate", "jeffreysP", "binomialP", "status");
+        foreach (var v in report.Versions)
+        {
+            foreach (var bin in v.Calibration)
+            {
+                Row(csv, v.Version, bin.UpTo, bin.Matured, bin.Bads, bin.ExpectedProbabilityOfBad, bin.ObservedBadRate, bin.JeffreysP, bin.BinomialP,
+                    JsonNamingPolicy.CamelCase.ConvertName(bin.Status.ToString()));
+            }
+        }
+
+        Section(csv, "rankOrdering", "version", "monotone", "reversals", "rule");
+        foreach (var v in report.Versions)
+        {
+            Row(csv, v.Version, v.RankOrdering.Monotone, string.Join(' ', v.RankOrdering.Reversals.Select(r => r?.ToString(CultureInfo.InvariantCulture) ?? "last")),
+                v.RankOrdering.Rule);
+        }
+
         return csv.ToString();
+    }
+
+    private static void Section(StringBuilder csv, string table, params object?[] header)
+    {
+        csv.Append("\r\n");
+        Row(csv, table);
+        Row(csv, header);
     }
 
     public static string Comparison(ComparisonReport report)
@@ -72,6 +120,7 @@ public static class ReportCsv
             var text = cells[i] switch
             {
                 null => "",
+                bool b => b ? "true" : "false",
                 double d => d.ToString("R", CultureInfo.InvariantCulture),
                 IFormattable f => f.ToString(null, CultureInfo.InvariantCulture),
                 var other => other.ToString() ?? "",
